@@ -1,0 +1,48 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import { signIn } from "next-auth/react";
+import { useState } from "react";
+import { useForm } from "react-hook-form";
+import { TextField } from "@/components/ui/field";
+import { signInSchema, type SignInInput } from "@/lib/validation/sign-in";
+
+export function SignInForm({ callbackUrl }: { callbackUrl: string }) {
+  const [failure, setFailure] = useState<string | null>(null);
+  const {
+    register,
+    handleSubmit,
+    formState: { errors, isSubmitting },
+  } = useForm<SignInInput>({ resolver: zodResolver(signInSchema), defaultValues: { email: "", password: "" } });
+
+  async function onSubmit(values: SignInInput) {
+    setFailure(null);
+    const result = await signIn("credentials", { ...values, redirect: false, callbackUrl });
+    if (!result || result.error) {
+      setFailure(
+        result?.status === 429
+          ? "Too many attempts. Wait a few minutes, then try again."
+          : "That e-mail and password do not match an active staff account.",
+      );
+      return;
+    }
+    window.location.assign(callbackUrl);
+  }
+
+  return (
+    <form onSubmit={handleSubmit(onSubmit)} noValidate aria-describedby={failure ? "sign-in-failure" : undefined}>
+      <div role="alert" id="sign-in-failure" className={failure ? "mb-5 rounded-plate border-l-8 border-ember bg-ember-soft p-3 font-bold" : "sr-only"}>
+        {failure}
+      </div>
+      <TextField id="email" label="E-mail" type="email" autoComplete="username" error={errors.email?.message} {...register("email")} />
+      <TextField id="password" label="Password" type="password" autoComplete="current-password" error={errors.password?.message} {...register("password")} />
+      <button
+        type="submit"
+        disabled={isSubmitting}
+        className="min-h-11 w-full rounded-plate border-2 border-harbour bg-harbour px-4 font-bold text-paper hover:bg-harbour-deep disabled:opacity-60"
+      >
+        {isSubmitting ? "Signing in…" : "Sign in"}
+      </button>
+    </form>
+  );
+}

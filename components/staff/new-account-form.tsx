@@ -1,0 +1,66 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useState } from "react";
+import { useForm } from "react-hook-form";
+import { createAccountAction } from "@/app/(staff)/staff/users/actions";
+import { SelectField, TextField } from "@/components/ui/field";
+import { ROLES } from "@/db/types";
+import { ROLE_LABELS } from "@/lib/auth/roles";
+import { newStaffAccountSchema, type NewStaffAccount, type NewStaffAccountInput } from "@/lib/validation/staff-account";
+
+export function NewAccountForm() {
+  const [status, setStatus] = useState<{ ok: boolean; message: string } | null>(null);
+  const {
+    register,
+    handleSubmit,
+    reset,
+    setError,
+    formState: { errors, isSubmitting },
+  } = useForm<NewStaffAccountInput, unknown, NewStaffAccount>({
+    resolver: zodResolver(newStaffAccountSchema),
+    defaultValues: { name: "", email: "", role: "communications", password: "" },
+  });
+
+  async function onSubmit(values: NewStaffAccount) {
+    const result = await createAccountAction(values);
+    setStatus({ ok: result.ok, message: result.message });
+    for (const [field, message] of Object.entries(result.errors ?? {})) {
+      if (field in values) setError(field as keyof NewStaffAccountInput, { message });
+    }
+    if (result.ok) reset();
+  }
+
+  return (
+    <form onSubmit={handleSubmit(onSubmit)} noValidate className="max-w-md">
+      <TextField id="new-name" label="Name" autoComplete="off" error={errors.name?.message} {...register("name")} />
+      <TextField id="new-email" label="E-mail" type="email" autoComplete="off" error={errors.email?.message} {...register("email")} />
+      <SelectField
+        id="new-role"
+        label="Role"
+        options={ROLES.map((r) => ({ value: r, label: ROLE_LABELS[r] }))}
+        error={errors.role?.message}
+        {...register("role")}
+      />
+      <TextField
+        id="new-password"
+        label="First password"
+        type="password"
+        autoComplete="new-password"
+        hint="At least 12 characters. Tell it to the person directly, never by e-mail."
+        error={errors.password?.message}
+        {...register("password")}
+      />
+      <button
+        type="submit"
+        disabled={isSubmitting}
+        className="min-h-11 rounded-plate border-2 border-harbour bg-harbour px-4 font-bold text-paper hover:bg-harbour-deep disabled:opacity-60"
+      >
+        {isSubmitting ? "Adding…" : "Add staff member"}
+      </button>
+      <p role="status" aria-live="polite" className={status ? `mt-3 font-bold ${status.ok ? "text-leaf" : "text-ember-deep"}` : "sr-only"}>
+        {status?.message}
+      </p>
+    </form>
+  );
+}

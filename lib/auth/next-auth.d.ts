@@ -1,0 +1,18 @@
+import type { Role } from "@/db/types";
+
+declare module "next-auth" {
+  interface User {
+    id: string;
+    role: Role;
+  }
+  interface Session {
+    user: { id: string; role: Role; name?: string | null; email?: string | null };
+  }
+}
+
+declare module "next-auth/jwt" {
+  interface JWT {
+    uid?: string;
+    role?: Role;
+  }
+}

@@ -1,0 +1,26 @@
+import type { Role } from "@/db/types";
+
+export interface StaffNavItem {
+  href: string;
+  label: string;
+  roles: readonly Role[];
+}
+
+/** Who may open which staff page. Pages enforce the same lists with requireStaffPage. */
+export const STAFF_PAGE_ROLES = {
+  overview: ["communications", "facilities", "admin"],
+  desk: ["communications", "admin"],
+  rooms: ["facilities", "admin"],
+  users: ["admin"],
+} as const satisfies Record<string, readonly Role[]>;
+
+export const STAFF_NAV: StaffNavItem[] = [
+  { href: "/staff", label: "Overview", roles: STAFF_PAGE_ROLES.overview },
+  { href: "/staff/desk", label: "Questions waiting", roles: STAFF_PAGE_ROLES.desk },
+  { href: "/staff/rooms", label: "Rooms", roles: STAFF_PAGE_ROLES.rooms },
+  { href: "/staff/users", label: "Staff accounts", roles: STAFF_PAGE_ROLES.users },
+];
+
+export function staffNavFor(role: Role): StaffNavItem[] {
+  return STAFF_NAV.filter((item) => item.roles.includes(role));
+}
