@@ -4,6 +4,8 @@ import nextTs from "eslint-config-next/typescript";
 const config = [
   ...nextVitals,
   ...nextTs,
-  { ignores: [".next/**", "node_modules/**", "data/**", "test-results/**", "playwright-report/**", "next-env.d.ts"] },
+  // Migrations are frozen in time and take Kysely<any>, as Kysely's docs advise: they must not follow today's table types.
+  { files: ["migrations/**/*.ts"], rules: { "@typescript-eslint/no-explicit-any": "off" } },
+  { ignores: [".next/**", "node_modules/**", "data/**", "test-results/**", "playwright-report/**", "next-env.d.ts", ".tmp/**"] },
 ];
 export default config;

@@ -1,16 +1,9 @@
-import { promises as fs } from "node:fs";
-import path from "node:path";
-import { fileURLToPath } from "node:url";
-import { FileMigrationProvider, Migrator, type MigrationResultSet } from "kysely";
+import { Migrator, type MigrationResultSet } from "kysely";
+import { MIGRATIONS } from "@/migrations";
 import type { DB } from "./connection";
 
-const MIGRATION_FOLDER = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "..", "migrations");
-
 export function migrator(db: DB): Migrator {
-  return new Migrator({
-    db,
-    provider: new FileMigrationProvider({ fs, path, migrationFolder: MIGRATION_FOLDER }),
-  });
+  return new Migrator({ db, provider: { getMigrations: async () => MIGRATIONS } });
 }
 
 /** Applies every pending migration; throws with the failing migration's name. */

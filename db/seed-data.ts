@@ -205,3 +205,28 @@ export const SEED_SETTINGS: Record<string, unknown> = {
     "2027-05-31",
   ],
 };
+
+export interface SeedProject {
+  school: string;
+  key: string;
+  title: string;
+  kind: "roof" | "windows" | "air_conditioning" | "ventilation" | "generator" | "entrance" | "other";
+  summary: string;
+  status: "planned" | "under_way" | "finished";
+  statusDate: string;
+}
+
+export const SEED_PROJECTS: SeedProject[] = [
+  { school: "tamsin-creek", key: "ventilators", title: "New unit ventilators with CO2 sensors", kind: "ventilation", summary: "Every classroom has a new unit ventilator that brings in outdoor air, with a sensor that shows the carbon dioxide level.", status: "finished", statusDate: "2026-08-14" },
+  { school: "tamsin-creek", key: "roof", title: "Roof replaced", kind: "roof", summary: "The whole roof was replaced, with new insulation and drains.", status: "finished", statusDate: "2026-07-31" },
+  { school: "tamsin-creek", key: "windows", title: "New windows that open", kind: "windows", summary: "Classroom windows were replaced with ones that open safely for fresh air.", status: "finished", statusDate: "2026-08-21" },
+  { school: "tamsin-creek", key: "cooling", title: "Air conditioning in the library and gym", kind: "air_conditioning", summary: "The library and gym now have air conditioning for hot days.", status: "under_way", statusDate: "2026-12-18" },
+  { school: "corrow-ridge", key: "ventilators", title: "New unit ventilators with CO2 sensors", kind: "ventilation", summary: "Classrooms have new unit ventilators that bring in outdoor air, with a carbon dioxide sensor in each room.", status: "finished", statusDate: "2026-08-07" },
+  { school: "corrow-ridge", key: "filters", title: "MERV-13 filters in the central air handler", kind: "ventilation", summary: "The central air handler that serves the library, office and gym now uses MERV-13 filters.", status: "finished", statusDate: "2026-08-28" },
+  { school: "corrow-ridge", key: "generator", title: "Emergency generator", kind: "generator", summary: "A new emergency generator keeps most of the building running in a power cut.", status: "finished", statusDate: "2026-10-09" },
+  { school: "corrow-ridge", key: "stairs", title: "One-way stairs and hallway signs", kind: "other", summary: "New signs and floor markings make the east stairs up only and the west stairs down only.", status: "finished", statusDate: "2026-08-25" },
+  { school: "eastmere", key: "cooling", title: "Air conditioning replaced throughout", kind: "air_conditioning", summary: "New rooftop air handlers heat, cool and filter the air in every part of the school.", status: "finished", statusDate: "2026-08-19" },
+  { school: "eastmere", key: "lab-exhaust", title: "Exhaust for the science labs", kind: "ventilation", summary: "Each science lab has its own exhaust fans that send lab air straight outside.", status: "finished", statusDate: "2026-09-04" },
+  { school: "eastmere", key: "generator", title: "Emergency generator", kind: "generator", summary: "An emergency generator covers most of the building if the power goes out.", status: "under_way", statusDate: "2026-12-11" },
+  { school: "eastmere", key: "entrance", title: "New main entrance with a welcome desk", kind: "entrance", summary: "Visitors now come in through one main entrance with a staffed welcome desk.", status: "planned", statusDate: "2027-01-15" },
+];

@@ -1,7 +1,7 @@
 import { hashPassword } from "@/lib/auth/password";
 import { isTechnicalTopic } from "@/lib/questions/state-machine";
 import type { DB } from "./connection";
-import { DEMO_PASSWORD, SEED_QUESTIONS, SEED_SCHOOLS, SEED_SETTINGS, SEED_USERS } from "./seed-data";
+import { DEMO_PASSWORD, SEED_PROJECTS, SEED_QUESTIONS, SEED_SCHOOLS, SEED_SETTINGS, SEED_USERS } from "./seed-data";
 
 /** Seeded rows carry a fixed time, so running the seed again changes nothing. */
 const SEEDED_AT = "2026-11-01T12:00:00.000Z";
@@ -119,6 +119,25 @@ export async function seed(db: DB): Promise<SeedSummary> {
           })
           .execute();
       }
+    }
+
+    for (const [index, p] of SEED_PROJECTS.entries()) {
+      const school = await trx.selectFrom("schools").select("id").where("slug", "=", p.school).executeTakeFirstOrThrow();
+      await trx
+        .insertInto("building_projects")
+        .values({
+          school_id: school.id,
+          key: p.key,
+          title: p.title,
+          kind: p.kind,
+          summary: p.summary,
+          status: p.status,
+          status_date: p.statusDate,
+          sort_order: index,
+          updated_at: SEEDED_AT,
+        })
+        .onConflict((oc) => oc.columns(["school_id", "key"]).doNothing())
+        .execute();
     }
 
     for (const [key, value] of Object.entries(SEED_SETTINGS)) {

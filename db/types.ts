@@ -122,6 +122,24 @@ export interface StaffEventTable {
   created_at: ColumnType<Timestamp, Timestamp | undefined, never>;
 }
 
+export const PROJECT_STATUSES = ["planned", "under_way", "finished"] as const;
+export type ProjectStatus = (typeof PROJECT_STATUSES)[number];
+
+export interface BuildingProjectTable {
+  id: Generated<number>;
+  school_id: number;
+  /** Stable name within the school, e.g. "roof"; the seed and imports match on it. */
+  key: string;
+  title: string;
+  kind: string;
+  summary: string;
+  status: ProjectStatus;
+  status_date: string;
+  sort_order: Generated<number>;
+  updated_at: Timestamp;
+  updated_by: number | null;
+}
+
 export interface Database {
   schools: SchoolTable;
   rooms: RoomTable;
@@ -132,6 +150,7 @@ export interface Database {
   outbox_attempts: OutboxAttemptTable;
   settings: SettingTable;
   staff_events: StaffEventTable;
+  building_projects: BuildingProjectTable;
 }
 
 export type School = Selectable<SchoolTable>;
@@ -147,3 +166,4 @@ export type QuestionEvent = Selectable<QuestionEventTable>;
 export type OutboxMessage = Selectable<OutboxTable>;
 export type NewOutboxMessage = Insertable<OutboxTable>;
 export type Setting = Selectable<SettingTable>;
+export type BuildingProject = Selectable<BuildingProjectTable>;

@@ -11,7 +11,7 @@ beforeAll(async () => {
 afterAll(async () => t.cleanup());
 
 async function snapshot() {
-  const tables = ["schools", "rooms", "users", "questions", "question_events", "settings"] as const;
+  const tables = ["schools", "rooms", "users", "questions", "question_events", "settings", "building_projects"] as const;
   const out: Record<string, unknown[]> = {};
   for (const table of tables) out[table] = await t.db.selectFrom(table).selectAll().execute();
   return out;

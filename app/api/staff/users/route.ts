@@ -1,6 +1,6 @@
 import { NextResponse } from "next/server";
 import { db } from "@/db/client";
-import { jsonError, validationError } from "@/lib/http/errors";
+import { validationError } from "@/lib/http/errors";
 import { readJson, staffRoute } from "@/lib/http/staff-route";
 import { createStaffAccount, listStaffAccounts, StaffAccountError } from "@/lib/staff/accounts";
 import { newStaffAccountSchema } from "@/lib/validation/staff-account";
