@@ -12,6 +12,8 @@ export async function register(): Promise<void> {
     settings = env();
   } catch (error) {
     console.error(error instanceof Error ? error.message : error);
+    // Next.js logs a failed hook and keeps serving; a server without its settings must not.
+    if (process.env.NODE_ENV === "production") process.exit(1);
     throw error;
   }
 

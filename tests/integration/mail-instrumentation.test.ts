@@ -102,7 +102,11 @@ describe("register", () => {
     delete process.env.NEXT_PHASE;
     const logged = vi.spyOn(console, "error").mockImplementation(() => undefined);
 
+    const exit = vi.spyOn(process, "exit").mockImplementation(() => undefined as never);
+
     await expect(register()).rejects.toThrow(/AUTH_SECRET is not set/);
+    expect(exit).toHaveBeenCalledWith(1);
+    exit.mockRestore();
     expect(logged).toHaveBeenCalledWith(expect.stringMatching(/AUTH_SECRET is not set/));
     expect(runningMailSender()).toBeUndefined();
   });
