@@ -24,7 +24,7 @@ run("npm", ["run", "build"], { env });
 
 const children = [
   start(process.execPath, ["node_modules/maildev/dist/bin/maildev.js", "--smtp", "1025", "--web", "1080", "--ip", "127.0.0.1", "--web-ip", "127.0.0.1", "--silent"]),
-  start("npx", ["next", "start", "-p", port], { env }),
+  start(process.execPath, ["node_modules/next/dist/bin/next", "start", "-p", port], { env }),
 ];
 
 console.log(`
@@ -41,13 +41,18 @@ Clearhall demo
 Press Ctrl+C to stop.
 `);
 
+let stopping = false;
 function stopAll(code = 0) {
+  if (stopping) return;
+  stopping = true;
   for (const child of children) if (child.exitCode === null) child.kill("SIGTERM");
-  process.exit(code);
+  process.exitCode = code;
 }
 process.on("SIGINT", () => stopAll(0));
 process.on("SIGTERM", () => stopAll(0));
-for (const child of children) child.on("exit", (code) => {
-  console.error(`A demo process stopped (exit ${code}); stopping the rest.`);
-  stopAll(code ?? 1);
-});
+for (const child of children) {
+  child.on("exit", (code) => {
+    if (!stopping) console.error(`A demo process stopped (exit ${code}); stopping the rest.`);
+    stopAll(code ?? 0);
+  });
+}
