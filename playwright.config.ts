@@ -7,6 +7,7 @@ const mailWebPort = Number(process.env.E2E_MAIL_WEB_PORT ?? 3280);
 // `npm test` builds the app and sets these; running `npx playwright test` alone expects a build already made.
 export default defineConfig({
   testDir: "tests/e2e",
+  outputDir: process.env.E2E_DIR ? `${process.env.E2E_DIR}/results` : "test-results",
   fullyParallel: false,
   workers: 1,
   retries: process.env.CI ? 1 : 0,

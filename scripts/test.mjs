@@ -21,7 +21,7 @@ if (!wants("e2e")) process.exit(0);
 ensureChromium();
 
 // Browser tests run against a production build over a fresh database with the demo data.
-const dir = resolve(".tmp/e2e");
+const dir = resolve(process.env.E2E_DIR ?? ".tmp/e2e");
 rmSync(dir, { recursive: true, force: true });
 mkdirSync(dir, { recursive: true });
 const [appPort, smtpPort, mailWebPort] = [await freePort(), await freePort(), await freePort()];

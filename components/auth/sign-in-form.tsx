@@ -5,6 +5,7 @@ import { signIn } from "next-auth/react";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { TextField } from "@/components/ui/field";
+import { TOO_MANY_ATTEMPTS } from "@/lib/auth/throttle";
 import { signInSchema, type SignInInput } from "@/lib/validation/sign-in";
 
 export function SignInForm({ callbackUrl }: { callbackUrl: string }) {
@@ -20,8 +21,8 @@ export function SignInForm({ callbackUrl }: { callbackUrl: string }) {
     const result = await signIn("credentials", { ...values, redirect: false, callbackUrl });
     if (!result || result.error) {
       setFailure(
-        result?.status === 429
-          ? "Too many attempts. Wait a few minutes, then try again."
+        result?.error === TOO_MANY_ATTEMPTS
+          ? "Too many failed attempts for this account. Wait 15 minutes, then try again, or ask an administrator."
           : "That e-mail and password do not match an active staff account.",
       );
       return;

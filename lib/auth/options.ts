@@ -5,8 +5,16 @@ import { db } from "@/db/client";
 import { env } from "@/lib/env";
 import { signInSchema } from "@/lib/validation/sign-in";
 import { authenticateStaff } from "./authenticate";
+import { signInThrottle, TOO_MANY_ATTEMPTS } from "./throttle";
 
 let cached: NextAuthOptions | undefined;
+
+/** The address a sign-in came from, as the proxy in front reports it; null when none does. */
+function clientAddress(headers: Record<string, unknown> | undefined): string | null {
+  const forwarded = headers?.["x-forwarded-for"];
+  const first = typeof forwarded === "string" ? forwarded.split(",")[0]?.trim() : undefined;
+  return first || null;
+}
 
 /** Built on first use so `next build` never needs the secret. */
 export function authOptions(): NextAuthOptions {
@@ -24,11 +32,21 @@ export function authOptions(): NextAuthOptions {
           email: { label: "E-mail", type: "email" },
           password: { label: "Password", type: "password" },
         },
-        async authorize(credentials) {
+        async authorize(credentials, request) {
           const parsed = signInSchema.safeParse(credentials);
           if (!parsed.success) return null;
-          const user = await authenticateStaff(db(), parsed.data.email, parsed.data.password);
-          return user ? { id: String(user.id), name: user.name, email: user.email, role: user.role } : null;
+          const account = parsed.data.email.trim().toLowerCase();
+          const address = clientAddress(request?.headers);
+          const throttle = signInThrottle();
+          // Refused before the password is checked, so a guess made while limited learns nothing.
+          if (throttle.isLimited(account, address)) throw new Error(TOO_MANY_ATTEMPTS);
+          const user = await authenticateStaff(db(), account, parsed.data.password);
+          if (!user) {
+            throttle.recordFailure(account, address);
+            return null;
+          }
+          throttle.recordSuccess(account);
+          return { id: String(user.id), name: user.name, email: user.email, role: user.role };
         },
       }),
     ],

@@ -94,3 +94,24 @@ test("the last active administrator cannot be turned off or demoted", async ({ p
   expect(disable.status()).toBe(409);
   expect((await page.request.get("/api/staff/me")).status()).toBe(200);
 });
+
+test("password guessing is slowed: after five failures even the right password waits", async ({ page, playwright, baseURL }) => {
+  const email = `guess.${Date.now()}@example.org`;
+  const admin = await playwright.request.newContext({ baseURL });
+  expect(await signInThroughApi(admin, DEMO_ACCOUNTS.admin)).toBe(200);
+  const created = await admin.post("/api/staff/users", { data: { name: "Sam Okonkwo-Hale", email, role: "communications", password: "right-password-123" } });
+  expect(created.status()).toBe(201);
+  await admin.dispose();
+
+  const guesser = await playwright.request.newContext({ baseURL });
+  for (let i = 0; i < 5; i++) await signInThroughApi(guesser, email, `wrong-guess-${i}`);
+  await signInThroughApi(guesser, email, "right-password-123");
+  expect((await guesser.get("/api/staff/me")).status()).toBe(401);
+  await guesser.dispose();
+
+  await page.goto("/signin");
+  await page.getByLabel("E-mail").fill(email);
+  await page.getByLabel("Password").fill("right-password-123");
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await expect(page.locator("#sign-in-failure")).toContainText("Too many failed attempts");
+});
