@@ -182,6 +182,15 @@ export const SEED_QUESTIONS: SeedQuestion[] = [
 export const SEED_SETTINGS: Record<string, unknown> = {
   reply_target_school_days: 3,
   district_name: DEMO_DISTRICT,
+  // Air and seating choices (lib/settings/air.ts); none is a limit from a standard.
+  co2_threshold_ppm: 1000,
+  co2_outdoor_ppm: 420,
+  co2_occupied_start_minute: 480,
+  co2_occupied_end_minute: 900,
+  seating_spacing_ft: 6,
+  zone_air_distribution_effectiveness: 1,
+  // The district's own clock: which day a question arrived on, and so when its reply is due.
+  district_time_zone: "America/New_York",
   district_holidays: [
     "2026-11-26",
     "2026-11-27",
@@ -229,4 +238,203 @@ export const SEED_PROJECTS: SeedProject[] = [
   { school: "eastmere", key: "lab-exhaust", title: "Exhaust for the science labs", kind: "ventilation", summary: "Each science lab has its own exhaust fans that send lab air straight outside.", status: "finished", statusDate: "2026-09-04" },
   { school: "eastmere", key: "generator", title: "Emergency generator", kind: "generator", summary: "An emergency generator covers most of the building if the power goes out.", status: "under_way", statusDate: "2026-12-11" },
   { school: "eastmere", key: "entrance", title: "New main entrance with a welcome desk", kind: "entrance", summary: "Visitors now come in through one main entrance with a staffed welcome desk.", status: "planned", statusDate: "2027-01-15" },
+];
+
+export interface SeedPublishedAnswer {
+  /** null: for every school. */
+  school: string | null;
+  topic: string;
+  /** The public wording of the question; also the seed's natural key. */
+  question: string;
+  answer: string;
+  publishedAt: string;
+}
+
+/**
+ * Answers the desk has already published, written the way the district writes its pages
+ * and consistent with content/. Plain Markdown, no personal details.
+ */
+export const SEED_PUBLISHED_ANSWERS: SeedPublishedAnswer[] = [
+  {
+    school: "tamsin-creek",
+    topic: "air",
+    question: "Does my child's classroom at Tamsin Creek get fresh air from outside, or does the same air just go round?",
+    answer: `Every classroom at Tamsin Creek gets fresh air from outside, even when the windows are closed.
+
+Each room has a new **unit ventilator**, the long cabinet under the windows. It pulls **outdoor air** in through a vent in the wall, passes it through a MERV-13 filter, warms it when needed, and blows it gently into the room. It also filters some of the room's own air and mixes it back in.
+
+Each classroom also has a CO2 sensor. When the reading passes 800 ppm, the unit opens its outdoor air damper wider, and our facilities staff get an alert if the reading stays high. On mild days teachers may open the new windows a few inches for extra air. On smoky days the windows stay shut and the filtered air does the work.
+
+You can see the figures for each room on [the Tamsin Creek air page](/schools/tamsin-creek/air). If your child has asthma or another breathing condition, please talk with your doctor and the school nurse.`,
+    publishedAt: "2026-11-19T15:00:00.000Z",
+  },
+  {
+    school: "tamsin-creek",
+    topic: "air",
+    question: "Do the classrooms at Tamsin Creek have air conditioning?",
+    answer: `No. The classrooms at Tamsin Creek do not have air conditioning. We are adding air conditioning to the **library** and the **gym**, the two largest rooms in the school. You can see where that work stands on [the Tamsin Creek building page](/schools/tamsin-creek/building).
+
+On very hot days, teachers may bring classes to the library or gym for part of the day. Classrooms keep getting outdoor air from their unit ventilators, and teachers can open the windows a few inches.
+
+Please send your child with a full water bottle on hot days.`,
+    publishedAt: "2026-11-20T14:30:00.000Z",
+  },
+  {
+    school: null,
+    topic: "air",
+    question: "What does the CO2 sensor in the classroom measure, and what level is too high?",
+    answer: `CO2, or carbon dioxide, is a gas we all breathe out. When many people share a room and not enough outdoor air comes in, the level goes up. So the sensor tells us how well a room is being aired out. It does not detect germs.
+
+CO2 is measured in parts per million (ppm). The CDC says a reading above 800 ppm suggests that a room may need more outdoor air. No standard sets a safe limit for CO2 indoors, so **800 ppm is a level our district chose to act on, not a danger line.**
+
+When a room passes 800 ppm, the ventilation lets in more outdoor air. If the reading stays high, our facilities staff get an alert and check the room.
+
+For questions about your own child's health, please ask the school nurse or your doctor.`,
+    publishedAt: "2026-11-18T16:00:00.000Z",
+  },
+  {
+    school: "eastmere",
+    topic: "air",
+    question: "How does Eastmere get fresh air into classrooms where the windows do not open?",
+    answer: `Eastmere does not rely on windows for fresh air. New **air handlers on the roof** bring in outdoor air for many rooms at once. Each one mixes outdoor air with filtered room air, passes it through MERV-13 filters, heats or cools it, and sends it through ducts to the rooms. Air leaves each room through a return vent in the ceiling.
+
+The classrooms have CO2 sensors. When a room passes 800 ppm, the system sends it more outdoor air, and facilities staff get an alert if the level stays high. Some rooms, such as the nurse's office and the music rooms, also have a portable air cleaner with a HEPA filter.
+
+On smoky days the system can cut back on outdoor air for a while, with the filters still running. Read more on [the Eastmere air page](/schools/eastmere/air).`,
+    publishedAt: "2026-11-21T13:00:00.000Z",
+  },
+  {
+    school: "eastmere",
+    topic: "building",
+    question: "What will the emergency generator at Eastmere keep running if the power goes out?",
+    answer: `The emergency generator at Eastmere stands in a locked, fenced yard beside the loading dock. You can see where its work stands on [the Eastmere building page](/schools/eastmere/building). When it is running, it starts on its own within moments of a power cut and covers most of the building:
+
+- heat
+- lights in every room, hall and stairway
+- the fire alarm
+- refrigeration in the kitchen, so food stays safe
+- the ventilation fans in the air handlers, and the lab exhaust
+- the elevators, phones, computer network and door locks
+
+It does not run the cooling machines of the air conditioning, the kitchen ovens, the stage lights or the field lights. None of these are needed to keep people safe. The fans keep moving filtered outdoor air even though the air is not cooled, and teachers stop any lab work with chemicals until the power is back.
+
+The generator runs for a short test each week, so you may hear it. Please keep students away from the generator yard.`,
+    publishedAt: "2026-11-24T15:30:00.000Z",
+  },
+  {
+    school: "corrow-ridge",
+    topic: "building",
+    question: "Does the generator at Corrow Ridge keep the heat and the ventilation on in a power cut?",
+    answer: `Yes. The new emergency generator behind Corrow Ridge starts on its own within moments of a power cut. It keeps the **heat**, the lights, the fire alarm, the kitchen refrigeration, the phones and network, the elevator and the **ventilation** running: both the classroom unit ventilators and the fans of the central air handler.
+
+A few things that use a lot of power are not on the generator: the cooling for the library and main office, the kitchen ovens and dishwasher, the machines in the tech shop, and the field lights. During a long outage the kitchen would serve cold lunches and shop classes would not use machines. The building stays warm, lit and aired out.
+
+Only licensed electricians service the generator. It runs for a short test each week.`,
+    publishedAt: "2026-11-22T14:00:00.000Z",
+  },
+  {
+    school: "tamsin-creek",
+    topic: "building",
+    question: "What happens at Tamsin Creek if the power goes out? Is there a generator?",
+    answer: `Tamsin Creek does not have a full emergency generator. That work was planned for our larger schools first.
+
+Like every school, Tamsin Creek has emergency lights and a fire alarm that run on batteries when the power goes out, as the fire code requires. Every room is on the ground floor, and in a short outage classes carry on in daylight.
+
+If the power stays out, the district may send children home early. We will tell you by phone and e-mail. After any outage, kitchen staff check the fridges and freezers and throw away any food that may not be safe.`,
+    publishedAt: "2026-11-23T16:00:00.000Z",
+  },
+  {
+    school: null,
+    topic: "cleaning",
+    question: "What products do custodians use to disinfect classrooms, and are they safe for a child with asthma?",
+    answer: `Our custodians always clean first with soap or detergent and water, then disinfect. We use three classes of product, each exactly as its label says:
+
+- a **quaternary ammonium disinfectant** ("quat") for most daily disinfecting. It has little smell, and a wall station mixes it with water at the label's strength;
+- a **hydrogen peroxide disinfectant** in the nurse's office, some special rooms, and any room where a student or staff member has told us that quat products bother their skin or breathing;
+- **diluted household bleach**, mixed fresh, only for deep cleaning after a reported case, and only in empty rooms.
+
+Only trained staff use these products, and students never handle them. Bleach is never mixed with ammonia or any other cleaner.
+
+If cleaning products trigger your child's asthma or allergies, please tell the school nurse. We will work out a plan with you, such as using the hydrogen peroxide product in your child's rooms. For advice about your child's health, follow your doctor and the local health department. Read more on [our cleaning and disinfection page](/district/cleaning-and-disinfection).`,
+    publishedAt: "2026-11-20T16:30:00.000Z",
+  },
+  {
+    school: null,
+    topic: "cleaning",
+    question: "Why are desks and railings sometimes still wet after they are cleaned?",
+    answer: `That is on purpose. Every disinfectant has a **contact time** printed on its label: how long the surface must stay wet for the product to kill the germs the label lists. If the surface dries too soon, or someone wipes it off, the product may not finish its job.
+
+So our staff put on enough product to keep the surface wet, and then leave it alone. Some products need about a minute, others a few minutes. Please do not wipe a damp desk or railing dry, and remind your child not to.`,
+    publishedAt: "2026-11-19T17:00:00.000Z",
+  },
+  {
+    school: null,
+    topic: "cleaning",
+    question: "Do you spray disinfectant in classrooms while students are there?",
+    answer: `No. Some evenings our crews use an **electrostatic sprayer**, a hand-held machine that sprays disinfectant as a fine mist that clings to surfaces. We use it only in empty rooms, in the evening or on weekends, never with students or staff in the room.
+
+The crew still cleans first, leaves the surfaces wet for the full contact time on the label, and airs the room out before it opens again. During the school day, day porters wipe touch points such as door handles and railings by hand.`,
+    publishedAt: "2026-11-21T15:00:00.000Z",
+  },
+  {
+    school: null,
+    topic: "signs",
+    question: "What do the orange \"wait here\" spots mean at pick-up?",
+    answer: `The orange **wait here** spots on the sidewalk near each exit door show where families can stand at pick-up. They are set apart to give people room. Please stand on a spot while you wait. If all the spots are taken, wait a little farther back along the sidewalk or in your car.
+
+Please arrive close to dismissal time, stay out of the bus lane, and tell the front office in writing if someone new will pick up your child. See [our signs and routes page](/district/signs-and-routes) for every sign.`,
+    publishedAt: "2026-11-18T14:00:00.000Z",
+  },
+  {
+    school: "corrow-ridge",
+    topic: "signs",
+    question: "Which stairs should my child use at Corrow Ridge?",
+    answer: `Corrow Ridge has two main stairways, and both are now one-way:
+
+- the **east stairs**, by the gym, are **up only**;
+- the **west stairs**, by the music rooms, are **down only**.
+
+Signs and floor markings show the way. Any student who needs it can use the elevator by the main office. Please ask the front office if your child needs more time between classes.
+
+In a fire drill or any emergency, students use the nearest safe stairs, whatever the sign says, and follow staff directions.`,
+    publishedAt: "2026-11-19T14:30:00.000Z",
+  },
+  {
+    school: null,
+    topic: "distancing",
+    question: "How far apart are the desks in classrooms now?",
+    answer: `We follow CDC guidance for schools. Desks are at least **3 feet apart** when students wear masks, and **6 feet apart** when they do not. Adults keep 6 feet from students and from each other where they can.
+
+Lunch runs in smaller groups with assigned seats and space between them, and some classes eat in the gym, the library or their own classroom.
+
+When health guidance changes, the local health department tells us, and we will write to families before the layout changes.`,
+    publishedAt: "2026-11-23T15:00:00.000Z",
+  },
+  {
+    school: null,
+    topic: "cases",
+    question: "If someone in my child's class is sick, how will I find out?",
+    answer: `When a school learns that someone who was in the building has a contagious illness the health department tracks, we tell families **by letter and by e-mail within one school day**.
+
+If your child was in the same class or group, you get a letter written for that group, with the days and places that matter and what to watch for. Other families may get a shorter note for the whole school.
+
+We **never name** a child or a staff member, and we ask families not to guess. The **local health department** decides who needs to quarantine and for how long; the school nurse can help explain what they ask. Please keep your e-mail address and phone number up to date with the front office. Read each step on [our page about reported cases](/district/when-a-case-is-reported).`,
+    publishedAt: "2026-11-20T15:30:00.000Z",
+  },
+  {
+    school: null,
+    topic: "other",
+    question: "Can my child still drink from the water fountains?",
+    answer: `Our water fountains now only fill bottles; they no longer have a spout to drink from. Please send your child with a **labelled, refillable water bottle**, full, every day. Custodians wipe the bottle fillers during the day with the other touch points.`,
+    publishedAt: "2026-11-18T15:30:00.000Z",
+  },
+  {
+    school: "eastmere",
+    topic: "building",
+    question: "Where do visitors check in at Eastmere?",
+    answer: `Visitors use the **main entrance** and check in at the **welcome desk** just inside, where a staff member is on duty all school day. Please bring a photo ID; you will get a visitor badge to wear.
+
+Students who arrive after the first bell also sign in at the welcome desk. After the first bell, all doors except the main entrance are locked. You can follow the entrance work on [the Eastmere building page](/schools/eastmere/building).`,
+    publishedAt: "2026-11-25T14:00:00.000Z",
+  },
 ];

@@ -1,7 +1,17 @@
 import { hashPassword } from "@/lib/auth/password";
 import { isTechnicalTopic } from "@/lib/questions/state-machine";
 import type { DB } from "./connection";
-import { DEMO_PASSWORD, SEED_PROJECTS, SEED_QUESTIONS, SEED_SCHOOLS, SEED_SETTINGS, SEED_USERS } from "./seed-data";
+import { seedRoomAir } from "./seed-air";
+import { seedCo2 } from "./seed-co2";
+import {
+  DEMO_PASSWORD,
+  SEED_PROJECTS,
+  SEED_PUBLISHED_ANSWERS,
+  SEED_QUESTIONS,
+  SEED_SCHOOLS,
+  SEED_SETTINGS,
+  SEED_USERS,
+} from "./seed-data";
 
 /** Seeded rows carry a fixed time, so running the seed again changes nothing. */
 const SEEDED_AT = "2026-11-01T12:00:00.000Z";
@@ -11,6 +21,7 @@ export interface SeedSummary {
   rooms: number;
   users: number;
   questions: number;
+  publishedAnswers: number;
 }
 
 /**
@@ -49,6 +60,14 @@ export async function seed(db: DB): Promise<SeedSummary> {
         .where("slug", "=", school.slug)
         .executeTakeFirstOrThrow();
       for (const room of school.rooms) {
+        const air = seedRoomAir(school.slug, room.name);
+        const airColumns = {
+          outdoor_air_cfm: air.outdoorAirCfm,
+          air_cleaners: air.airCleaners,
+          cadr_cfm_each: air.cadrCfmEach,
+          merv: air.merv,
+          windows_open: air.windowsOpen ? 1 : 0,
+        };
         await trx
           .insertInto("rooms")
           .values({
@@ -59,10 +78,12 @@ export async function seed(db: DB): Promise<SeedSummary> {
             width_ft: room.widthFt,
             ceiling_ft: room.ceilingFt,
             occupancy: room.occupancy,
+            ...airColumns,
             created_at: SEEDED_AT,
             updated_at: SEEDED_AT,
           })
-          .onConflict((oc) => oc.columns(["school_id", "name"]).doNothing())
+          // A room seeded before it had air figures gets them; one staff have edited since is left alone.
+          .onConflict((oc) => oc.columns(["school_id", "name"]).doUpdateSet(airColumns).where("rooms.updated_at", "=", SEEDED_AT))
           .execute();
       }
     }
@@ -140,6 +161,28 @@ export async function seed(db: DB): Promise<SeedSummary> {
         .execute();
     }
 
+    // Published answers have no natural key column; the public wording of the question serves as one.
+    const publisher = await trx.selectFrom("users").select("id").where("role", "=", "communications").orderBy("id").executeTakeFirst();
+    for (const a of SEED_PUBLISHED_ANSWERS) {
+      const exists = await trx.selectFrom("published_answers").select("id").where("question_text", "=", a.question).executeTakeFirst();
+      if (exists) continue;
+      const school = a.school
+        ? await trx.selectFrom("schools").select("id").where("slug", "=", a.school).executeTakeFirstOrThrow()
+        : null;
+      await trx
+        .insertInto("published_answers")
+        .values({
+          school_id: school?.id ?? null,
+          topic: a.topic,
+          question_text: a.question,
+          answer_markdown: a.answer,
+          published_at: a.publishedAt,
+          published_by: publisher?.id ?? null,
+          updated_at: a.publishedAt,
+        })
+        .execute();
+    }
+
     for (const [key, value] of Object.entries(SEED_SETTINGS)) {
       await trx
         .insertInto("settings")
@@ -149,12 +192,15 @@ export async function seed(db: DB): Promise<SeedSummary> {
     }
   });
 
-  const count = async (table: "schools" | "rooms" | "users" | "questions") =>
+  await seedCo2(db);
+
+  const count = async (table: "schools" | "rooms" | "users" | "questions" | "published_answers") =>
     Number((await db.selectFrom(table).select((eb) => eb.fn.countAll().as("n")).executeTakeFirstOrThrow()).n);
   return {
     schools: await count("schools"),
     rooms: await count("rooms"),
     users: await count("users"),
     questions: await count("questions"),
+    publishedAnswers: await count("published_answers"),
   };
 }

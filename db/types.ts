@@ -31,8 +31,18 @@ export interface RoomTable {
   width_ft: number;
   ceiling_ft: number;
   occupancy: number;
+  /** Outdoor air from the unit ventilator or air handler, cfm. */
+  outdoor_air_cfm: Generated<number>;
+  /** Portable air cleaners in the room. */
+  air_cleaners: Generated<number>;
+  /** Clean air delivery rate of each air cleaner, cfm. */
+  cadr_cfm_each: Generated<number>;
+  /** Filter rating, MERV 1–16; null when not known. */
+  merv: number | null;
+  windows_open: Generated<Flag>;
   created_at: ColumnType<Timestamp, Timestamp | undefined, never>;
   updated_at: Timestamp;
+  updated_by: number | null;
 }
 
 export interface UserTable {
@@ -140,6 +150,75 @@ export interface BuildingProjectTable {
   updated_by: number | null;
 }
 
+export interface PublishedAnswerTable {
+  id: Generated<number>;
+  /** The question it grew from, if any; never shown publicly. */
+  question_id: number | null;
+  /** null: for every school. */
+  school_id: number | null;
+  topic: string;
+  /** The question as rewritten for the public, with no personal details. */
+  question_text: string;
+  answer_markdown: string;
+  published_at: Timestamp;
+  unpublished_at: Timestamp | null;
+  published_by: number | null;
+  updated_at: Timestamp;
+}
+
+/** One accepted public question, for the rate limit; keyed hashes only, never the raw address. */
+export interface SubmissionAttemptTable {
+  id: Generated<number>;
+  ip_hash: string;
+  email_hash: string;
+  created_at: Timestamp;
+}
+
+/** The reply as sent to the asker. */
+export interface QuestionReplyTable {
+  id: Generated<number>;
+  question_id: number;
+  body_markdown: string;
+  sent_at: Timestamp;
+  sent_by: number | null;
+}
+
+/** One sensor reading; the key is (room_id, measured_at). */
+export interface Co2ReadingTable {
+  room_id: number;
+  /** ISO 8601 in UTC. */
+  measured_at: Timestamp;
+  co2_ppm: number;
+}
+
+/** A room's CO2 figures for one school day (occupied hours only), recomputed after each import. */
+export interface Co2DailyTable {
+  room_id: number;
+  /** YYYY-MM-DD in the district's time zone. */
+  day: string;
+  readings: number;
+  covered_minutes: number;
+  mean_ppm: number;
+  peak_ppm: number;
+  minutes_above: number;
+  threshold_ppm: number;
+  steady_state_ppm: number | null;
+  computed_at: Timestamp;
+}
+
+export interface Co2ImportTable {
+  id: Generated<number>;
+  file_name: string;
+  uploaded_by: number | null;
+  rows_read: number;
+  rows_added: number;
+  duplicates: number;
+  room_days: number;
+  first_reading_at: Timestamp | null;
+  last_reading_at: Timestamp | null;
+  created_at: Timestamp;
+}
+
 export interface Database {
   schools: SchoolTable;
   rooms: RoomTable;
@@ -151,12 +230,21 @@ export interface Database {
   settings: SettingTable;
   staff_events: StaffEventTable;
   building_projects: BuildingProjectTable;
+  published_answers: PublishedAnswerTable;
+  submission_attempts: SubmissionAttemptTable;
+  question_replies: QuestionReplyTable;
+  co2_readings: Co2ReadingTable;
+  co2_daily: Co2DailyTable;
+  co2_imports: Co2ImportTable;
 }
 
 export type School = Selectable<SchoolTable>;
 export type NewSchool = Insertable<SchoolTable>;
 export type Room = Selectable<RoomTable>;
 export type NewRoom = Insertable<RoomTable>;
+export type RoomUpdate = Updateable<RoomTable>;
+export type Co2Daily = Selectable<Co2DailyTable>;
+export type Co2Import = Selectable<Co2ImportTable>;
 export type User = Selectable<UserTable>;
 export type NewUser = Insertable<UserTable>;
 export type UserUpdate = Updateable<UserTable>;
@@ -167,3 +255,6 @@ export type OutboxMessage = Selectable<OutboxTable>;
 export type NewOutboxMessage = Insertable<OutboxTable>;
 export type Setting = Selectable<SettingTable>;
 export type BuildingProject = Selectable<BuildingProjectTable>;
+export type PublishedAnswer = Selectable<PublishedAnswerTable>;
+export type NewPublishedAnswer = Insertable<PublishedAnswerTable>;
+export type QuestionReply = Selectable<QuestionReplyTable>;

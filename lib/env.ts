@@ -18,6 +18,11 @@ const envSchema = z.object({
     .enum(["0", "1", "true", "false"])
     .default("0")
     .transform((v) => v === "1" || v === "true"),
+  // Public questions accepted per IP address, and per e-mail address, in a sliding window.
+  ASK_RATE_LIMIT_COUNT: z.coerce.number().int().min(1).max(1_000).default(5),
+  ASK_RATE_LIMIT_WINDOW_MINUTES: z.coerce.number().int().min(1).max(24 * 60).default(10),
+  // How many reverse proxies in front of the app append to X-Forwarded-For; 0 = the header is not trusted.
+  TRUST_PROXY: z.coerce.number().int().min(0).max(10).default(0),
 });
 
 export type Env = z.infer<typeof envSchema> & { AUTH_SECRET: string };

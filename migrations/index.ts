@@ -5,6 +5,11 @@ import * as m0003 from "./0003_questions";
 import * as m0004 from "./0004_outbox";
 import * as m0005 from "./0005_settings";
 import * as m0006 from "./0006_building_projects";
+import * as m0007 from "./0007_published_answers";
+import * as m0008 from "./0008_submission_attempts";
+import * as m0009 from "./0009_question_replies";
+import * as m0010 from "./0010_room_air";
+import * as m0011 from "./0011_co2_readings";
 
 /**
  * Every migration, by name, in order. Listed by hand rather than read from the
@@ -18,4 +23,9 @@ export const MIGRATIONS: Record<string, Migration> = {
   "0004_outbox": m0004,
   "0005_settings": m0005,
   "0006_building_projects": m0006,
+  "0007_published_answers": m0007,
+  "0008_submission_attempts": m0008,
+  "0009_question_replies": m0009,
+  "0010_room_air": m0010,
+  "0011_co2_readings": m0011,
 };

@@ -8,7 +8,7 @@ async function main(): Promise<void> {
   try {
     await migrateToLatest(db);
     const s = await seed(db);
-    console.log(`Demo data in ${env().DATABASE_URL}: ${s.schools} schools, ${s.rooms} rooms, ${s.users} staff accounts, ${s.questions} questions.`);
+    console.log(`Demo data in ${env().DATABASE_URL}: ${s.schools} schools, ${s.rooms} rooms, ${s.users} staff accounts, ${s.questions} questions, ${s.publishedAnswers} published answers.`);
   } catch (error) {
     console.error(error instanceof Error ? error.message : error);
     process.exitCode = 1;

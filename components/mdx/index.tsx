@@ -4,6 +4,7 @@ import { headingId } from "@/lib/content/files";
 import { AskAboutThis } from "./ask-about-this";
 import { Callout } from "./callout";
 import { Caution } from "./caution";
+import { Co2Week } from "./co2-week";
 import { ProjectTimeline } from "./project-timeline";
 import { RoomFigures } from "./room-figures";
 import { SignGallery } from "./sign-gallery";
@@ -23,6 +24,7 @@ export const mdxComponents: MDXComponents = {
   Step,
   ProjectTimeline,
   RoomFigures,
+  Co2Week,
   SignGallery,
   AskAboutThis,
   h2: (props: ComponentPropsWithoutRef<"h2">) => <h2 id={headingId(textOf(props.children))} className="mt-10 mb-3 scroll-mt-4 text-2xl" {...props} />,

@@ -11,6 +11,7 @@ export const STAFF_PAGE_ROLES = {
   overview: ["communications", "facilities", "admin"],
   desk: ["communications", "admin"],
   rooms: ["facilities", "admin"],
+  readings: ["facilities", "admin"],
   projects: ["facilities", "admin"],
   users: ["admin"],
 } as const satisfies Record<string, readonly Role[]>;
@@ -19,6 +20,7 @@ export const STAFF_NAV: StaffNavItem[] = [
   { href: "/staff", label: "Overview", roles: STAFF_PAGE_ROLES.overview },
   { href: "/staff/desk", label: "Questions waiting", roles: STAFF_PAGE_ROLES.desk },
   { href: "/staff/rooms", label: "Rooms", roles: STAFF_PAGE_ROLES.rooms },
+  { href: "/staff/readings", label: "CO2 readings", roles: STAFF_PAGE_ROLES.readings },
   { href: "/staff/projects", label: "Building work", roles: STAFF_PAGE_ROLES.projects },
   { href: "/staff/users", label: "Staff accounts", roles: STAFF_PAGE_ROLES.users },
 ];

@@ -11,6 +11,7 @@ export const MDX_COMPONENTS = [
   "Step",
   "ProjectTimeline",
   "RoomFigures",
+  "Co2Week",
   "SignGallery",
   "AskAboutThis",
 ] as const;

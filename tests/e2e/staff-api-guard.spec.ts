@@ -8,6 +8,13 @@ const STAFF_ROUTES: { method: "GET" | "POST" | "PATCH"; path: string; data?: unk
   { method: "POST", path: "/api/staff/users", data: { name: "No Session", email: "nosession@example.org", role: "admin", password: "long-enough-password" } },
   { method: "PATCH", path: "/api/staff/users/1", data: { role: "communications" } },
   { method: "PATCH", path: "/api/staff/projects/1", data: { status: "finished", statusDate: "2026-11-30" } },
+  { method: "POST", path: "/api/staff/rooms/import" },
+  { method: "POST", path: "/api/staff/rooms/import?dryRun=1" },
+  { method: "GET", path: "/api/staff/rooms/export" },
+  { method: "GET", path: "/api/staff/rooms/1" },
+  { method: "PATCH", path: "/api/staff/rooms/1", data: { name: "Room 101", use: "classroom_5_8", units: "us", length: 30, width: 30, ceiling: 9.5, occupancy: 22, outdoorAir: 420, airCleaners: 0, merv: 13, windowsOpen: true } },
+  { method: "POST", path: "/api/staff/rooms", data: { school: "tamsin-creek", name: "Room 999", use: "office", units: "us", length: 10, width: 10, ceiling: 9, occupancy: 2, outdoorAir: 50, airCleaners: 0, merv: null, windowsOpen: false } },
+  { method: "POST", path: "/api/staff/co2/import" },
 ];
 
 for (const route of STAFF_ROUTES) {

@@ -3,8 +3,8 @@ import { DEMO_ACCOUNTS, signInThroughApi, signInThroughPage } from "./support/st
 
 const NAV_BY_ROLE = {
   communications: ["Overview", "Questions waiting"],
-  facilities: ["Overview", "Rooms", "Building work"],
-  admin: ["Overview", "Questions waiting", "Rooms", "Building work", "Staff accounts"],
+  facilities: ["Overview", "Rooms", "CO2 readings", "Building work"],
+  admin: ["Overview", "Questions waiting", "Rooms", "CO2 readings", "Building work", "Staff accounts"],
 } as const;
 
 test("an anonymous visitor sent to /staff lands on sign-in", async ({ page }) => {

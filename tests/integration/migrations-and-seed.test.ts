@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { migrateToLatest } from "@/db/migrate";
 import { seed } from "@/db/seed";
-import { SEED_SCHOOLS, SEED_USERS } from "@/db/seed-data";
+import { SEED_PUBLISHED_ANSWERS, SEED_SCHOOLS, SEED_USERS } from "@/db/seed-data";
 import { createTestDb, type TestDb } from "../support/test-db";
 
 let t: TestDb;
@@ -11,7 +11,20 @@ beforeAll(async () => {
 afterAll(async () => t.cleanup());
 
 async function snapshot() {
-  const tables = ["schools", "rooms", "users", "questions", "question_events", "settings", "building_projects"] as const;
+  const tables = [
+    "schools",
+    "rooms",
+    "users",
+    "questions",
+    "question_events",
+    "settings",
+    "building_projects",
+    "published_answers",
+    "submission_attempts",
+    "question_replies",
+    "co2_readings",
+    "co2_daily",
+  ] as const;
   const out: Record<string, unknown[]> = {};
   for (const table of tables) out[table] = await t.db.selectFrom(table).selectAll().execute();
   return out;
@@ -52,6 +65,27 @@ describe("seed", () => {
     expect(roles).toEqual(["admin", "communications", "facilities"]);
     expect(summary.questions).toBeGreaterThanOrEqual(5);
     expect(SEED_USERS.map((u) => u.email)).toEqual(["comms@example.org", "facilities@example.org", "admin@example.org"]);
+    expect(summary.publishedAnswers).toBe(SEED_PUBLISHED_ANSWERS.length);
+    expect(summary.publishedAnswers).toBeGreaterThanOrEqual(12);
+  });
+
+  it("publishes answers across every school and the district, on each topic families ask about", async () => {
+    const rows = await t.db
+      .selectFrom("published_answers")
+      .leftJoin("schools", "schools.id", "published_answers.school_id")
+      .select(["schools.slug", "published_answers.topic", "published_answers.question_text", "published_answers.answer_markdown"])
+      .execute();
+    expect(new Set(rows.map((r) => r.slug ?? "district"))).toEqual(new Set(["district", ...SEED_SCHOOLS.map((s) => s.slug)]));
+    for (const topic of ["air", "building", "cleaning", "signs", "distancing", "cases"]) {
+      expect(rows.some((r) => r.topic === topic), topic).toBe(true);
+    }
+    const text = rows.map((r) => `${r.question_text}\n${r.answer_markdown}`).join("\n");
+    for (const subject of [/ventilat/i, /air conditioning/i, /generator/i, /quaternary ammonium/i, /sign/i, /feet apart/i]) {
+      expect(text).toMatch(subject);
+    }
+    // Public words: no e-mail addresses, no raw HTML.
+    expect(text).not.toMatch(/@/);
+    expect(text).not.toMatch(/<[a-z]/i);
   });
 
   it("run twice leaves the same data", async () => {

@@ -31,3 +31,20 @@ describe("outdoor air per person from steady-state CO2", () => {
     expect(at22 / at0).toBeCloseTo(1.0805, 4);
   });
 });
+
+describe("a room's daily outdoor-air estimate", () => {
+  it("children's classroom at a 1,100 ppm plateau, 420 ppm outdoors: 4.53 L/s per person at 22 °C (calc from REFERENCES §3)", async () => {
+    const { outdoorAirEstimate } = await import("@/lib/co2/estimate");
+    const estimate = outdoorAirEstimate({ use: "classroom_5_8", level: "elementary", steadyStatePpm: 1100, outdoorPpm: 420 });
+    // G = 0.00285 × (273.15 + 22) / 273.15 = 0.003079 L/s; Vo = 0.003079 / 0.000680 = 4.53 L/s (9.60 cfm).
+    expect(estimate?.generationLps).toBeCloseTo(0.00285 * (295.15 / 273.15), 10);
+    expect(estimate?.lpsPerPerson).toBeCloseTo(4.53, 2);
+    expect(estimate?.cfmPerPerson).toBeCloseTo(9.6, 2);
+  });
+
+  it("makes no estimate for a gym, or without a plateau", async () => {
+    const { outdoorAirEstimate } = await import("@/lib/co2/estimate");
+    expect(outdoorAirEstimate({ use: "gym", level: "high", steadyStatePpm: 1100, outdoorPpm: 420 })).toBeNull();
+    expect(outdoorAirEstimate({ use: "lecture", level: "high", steadyStatePpm: null, outdoorPpm: 420 })).toBeNull();
+  });
+});

@@ -8,6 +8,9 @@ describe("settings", () => {
       DATABASE_URL: "./data/clearhall.db",
       SMTP_URL: "smtp://127.0.0.1:1025",
       APP_URL: "http://localhost:3000",
+      ASK_RATE_LIMIT_COUNT: 5,
+      ASK_RATE_LIMIT_WINDOW_MINUTES: 10,
+      TRUST_PROXY: 0,
     });
     expect(env.AUTH_SECRET.length).toBeGreaterThanOrEqual(32);
   });
@@ -24,5 +27,16 @@ describe("settings", () => {
   it("rejects a bad value with a message naming it", () => {
     expect(() => parseEnv({ SMTP_URL: "http://mail" })).toThrow(/SMTP_URL/);
     expect(() => parseEnv({ NODE_ENV: "production", AUTH_SECRET: "short" })).toThrow(/at least 32/);
+    expect(() => parseEnv({ ASK_RATE_LIMIT_COUNT: "0" })).toThrow(/ASK_RATE_LIMIT_COUNT/);
+    expect(() => parseEnv({ ASK_RATE_LIMIT_WINDOW_MINUTES: "ten" })).toThrow(/ASK_RATE_LIMIT_WINDOW_MINUTES/);
+    expect(() => parseEnv({ TRUST_PROXY: "yes" })).toThrow(/TRUST_PROXY/);
+  });
+
+  it("reads the question rate limit and the proxy setting", () => {
+    expect(parseEnv({ ASK_RATE_LIMIT_COUNT: "3", ASK_RATE_LIMIT_WINDOW_MINUTES: "30", TRUST_PROXY: "1" })).toMatchObject({
+      ASK_RATE_LIMIT_COUNT: 3,
+      ASK_RATE_LIMIT_WINDOW_MINUTES: 30,
+      TRUST_PROXY: 1,
+    });
   });
 });

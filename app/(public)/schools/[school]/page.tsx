@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { SchoolAirSummary } from "@/components/air/school-air-summary";
 import { AskAboutThis } from "@/components/mdx/ask-about-this";
 import { Breadcrumbs } from "@/components/site/breadcrumbs";
 import { SchoolTopicNav } from "@/components/site/school-topic-nav";
@@ -61,6 +62,8 @@ export default async function SchoolOverviewPage({ params }: Params) {
           )}
         </ul>
       </section>
+
+      <SchoolAirSummary school={school.slug} />
 
       {projects.length > 0 ? (
         <section aria-labelledby="work" className="mt-section">
