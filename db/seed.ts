@@ -3,6 +3,7 @@ import { isTechnicalTopic } from "@/lib/questions/state-machine";
 import type { DB } from "./connection";
 import { seedRoomAir } from "./seed-air";
 import { seedCo2 } from "./seed-co2";
+import { SEED_DESK_QUESTIONS, seedSnippets } from "./seed-desk";
 import {
   DEMO_PASSWORD,
   SEED_PROJECTS,
@@ -105,7 +106,7 @@ export async function seed(db: DB): Promise<SeedSummary> {
         .execute();
     }
 
-    for (const q of SEED_QUESTIONS) {
+    for (const q of [...SEED_QUESTIONS, ...SEED_DESK_QUESTIONS]) {
       const school = q.school
         ? await trx.selectFrom("schools").select("id").where("slug", "=", q.school).executeTakeFirstOrThrow()
         : null;
@@ -193,6 +194,7 @@ export async function seed(db: DB): Promise<SeedSummary> {
   });
 
   await seedCo2(db);
+  await seedSnippets(db, SEEDED_AT);
 
   const count = async (table: "schools" | "rooms" | "users" | "questions" | "published_answers") =>
     Number((await db.selectFrom(table).select((eb) => eb.fn.countAll().as("n")).executeTakeFirstOrThrow()).n);

@@ -71,8 +71,45 @@ export interface QuestionTable {
   technical: Flag;
   assignee_id: number | null;
   status_token_hash: string | null;
+  /** Set when the question was joined to another; that question's reply answers this asker too. */
+  merged_into_id: ColumnType<number | null, number | null | undefined, number | null>;
+  /** The draft facilities approved; a newer draft needs a new check. */
+  approved_draft_id: ColumnType<number | null, number | null | undefined, number | null>;
   created_at: ColumnType<Timestamp, Timestamp | undefined, never>;
   updated_at: Timestamp;
+}
+
+export interface QuestionDraftTable {
+  id: Generated<number>;
+  question_id: number;
+  body_markdown: string;
+  /** The question as the public will read it, without personal details. */
+  public_question: Generated<string>;
+  author_id: number | null;
+  created_at: ColumnType<Timestamp, Timestamp | undefined, never>;
+}
+
+export interface QuestionNoteTable {
+  id: Generated<number>;
+  question_id: number;
+  author_id: number | null;
+  body: string;
+  created_at: ColumnType<Timestamp, Timestamp | undefined, never>;
+}
+
+export interface ReplySnippetTable {
+  id: Generated<number>;
+  title: string;
+  body_markdown: string;
+  updated_by: number | null;
+  updated_at: Timestamp;
+}
+
+export interface QuestionStatusTokenTable {
+  id: Generated<number>;
+  question_id: number;
+  token_hash: string;
+  created_at: ColumnType<Timestamp, Timestamp | undefined, never>;
 }
 
 export interface QuestionEventTable {
@@ -236,6 +273,10 @@ export interface Database {
   co2_readings: Co2ReadingTable;
   co2_daily: Co2DailyTable;
   co2_imports: Co2ImportTable;
+  question_drafts: QuestionDraftTable;
+  question_notes: QuestionNoteTable;
+  reply_snippets: ReplySnippetTable;
+  question_status_tokens: QuestionStatusTokenTable;
 }
 
 export type School = Selectable<SchoolTable>;

@@ -10,6 +10,7 @@ import * as m0008 from "./0008_submission_attempts";
 import * as m0009 from "./0009_question_replies";
 import * as m0010 from "./0010_room_air";
 import * as m0011 from "./0011_co2_readings";
+import * as m0013 from "./0013_desk";
 
 /**
  * Every migration, by name, in order. Listed by hand rather than read from the
@@ -28,4 +29,5 @@ export const MIGRATIONS: Record<string, Migration> = {
   "0009_question_replies": m0009,
   "0010_room_air": m0010,
   "0011_co2_readings": m0011,
+  "0013_desk": m0013,
 };

@@ -42,7 +42,14 @@ export async function questionStatusByToken(db: DB, token: string): Promise<Ques
       "question_replies.body_markdown as replyBody",
       "question_replies.sent_at as replySentAt",
     ])
-    .where("questions.status_token_hash", "=", hashStatusToken(token.slice(0, 200)))
+    .where((eb) => {
+      const hash = hashStatusToken(token.slice(0, 200));
+      // The link from the confirmation e-mail, or the one from a reply e-mail.
+      return eb.or([
+        eb("questions.status_token_hash", "=", hash),
+        eb("questions.id", "in", eb.selectFrom("question_status_tokens").select("question_id").where("token_hash", "=", hash)),
+      ]);
+    })
     .executeTakeFirst();
   if (!row) return null;
 

@@ -2,9 +2,9 @@ import { expect, test } from "@playwright/test";
 import { DEMO_ACCOUNTS, signInThroughApi, signInThroughPage } from "./support/staff";
 
 const NAV_BY_ROLE = {
-  communications: ["Overview", "Questions waiting"],
-  facilities: ["Overview", "Rooms", "CO2 readings", "Building work"],
-  admin: ["Overview", "Questions waiting", "Rooms", "CO2 readings", "Building work", "Staff accounts"],
+  communications: ["Overview", "Questions", "Reply snippets"],
+  facilities: ["Overview", "Facilities check", "Rooms", "CO2 readings", "Building work"],
+  admin: ["Overview", "Questions", "Facilities check", "Reply snippets", "Rooms", "CO2 readings", "Building work", "Staff accounts", "Settings"],
 } as const;
 
 test("an anonymous visitor sent to /staff lands on sign-in", async ({ page }) => {

@@ -24,6 +24,9 @@ async function snapshot() {
     "question_replies",
     "co2_readings",
     "co2_daily",
+    "question_drafts",
+    "question_notes",
+    "reply_snippets",
   ] as const;
   const out: Record<string, unknown[]> = {};
   for (const table of tables) out[table] = await t.db.selectFrom(table).selectAll().execute();
