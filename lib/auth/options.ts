@@ -1,19 +1,38 @@
 import "server-only";
-import type { NextAuthOptions } from "next-auth";
+import type { CookieOption, NextAuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
 import { db } from "@/db/client";
 import { env } from "@/lib/env";
+import { clientIp, rateLimitAddressKey, UNKNOWN_CLIENT } from "@/lib/http/client-ip";
 import { signInSchema } from "@/lib/validation/sign-in";
 import { authenticateStaff } from "./authenticate";
 import { signInThrottle, TOO_MANY_ATTEMPTS } from "./throttle";
 
 let cached: NextAuthOptions | undefined;
 
-/** The address a sign-in came from, as the proxy in front reports it; null when none does. */
-function clientAddress(headers: Record<string, unknown> | undefined): string | null {
+/**
+ * The address a sign-in came from, for the per-address throttle: the entry the trusted proxy
+ * wrote (TRUST_PROXY), as for the question form's rate limit; null when no proxy is trusted.
+ * Entries further left are whatever the client sent, and trusting them would let a guesser
+ * pick a fresh address for every try, or use up someone else's.
+ */
+export function signInAddress(headers: Record<string, unknown> | undefined, trustedProxies: number): string | null {
   const forwarded = headers?.["x-forwarded-for"];
-  const first = typeof forwarded === "string" ? forwarded.split(",")[0]?.trim() : undefined;
-  return first || null;
+  const ip = clientIp(new Headers(typeof forwarded === "string" ? { "x-forwarded-for": forwarded } : {}), trustedProxies);
+  return ip === UNKNOWN_CLIENT ? null : rateLimitAddressKey(ip);
+}
+
+/**
+ * The session cookie: never readable by page scripts (httpOnly), not sent with cross-site
+ * posts or embedded requests (SameSite=Lax), and, when the site is served over HTTPS, only
+ * sent over HTTPS (Secure, with the __Secure- prefix browsers enforce).
+ */
+export function sessionCookie(appUrl: string): CookieOption {
+  const secure = new URL(appUrl).protocol === "https:";
+  return {
+    name: `${secure ? "__Secure-" : ""}next-auth.session-token`,
+    options: { httpOnly: true, sameSite: "lax", path: "/", secure },
+  };
 }
 
 /** Built on first use so `next build` never needs the secret. */
@@ -24,6 +43,9 @@ export function authOptions(): NextAuthOptions {
   cached = {
     secret: settings.AUTH_SECRET,
     session: { strategy: "jwt", maxAge: 8 * 60 * 60 },
+    // From APP_URL, not from how a request arrived: behind a TLS-terminating proxy the app sees http.
+    useSecureCookies: new URL(settings.APP_URL).protocol === "https:",
+    cookies: { sessionToken: sessionCookie(settings.APP_URL) },
     pages: { signIn: "/signin", error: "/signin" },
     providers: [
       CredentialsProvider({
@@ -36,7 +58,7 @@ export function authOptions(): NextAuthOptions {
           const parsed = signInSchema.safeParse(credentials);
           if (!parsed.success) return null;
           const account = parsed.data.email.trim().toLowerCase();
-          const address = clientAddress(request?.headers);
+          const address = signInAddress(request?.headers, settings.TRUST_PROXY);
           const throttle = signInThrottle();
           // Refused before the password is checked, so a guess made while limited learns nothing.
           if (throttle.isLimited(account, address)) throw new Error(TOO_MANY_ATTEMPTS);
