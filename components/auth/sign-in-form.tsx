@@ -5,8 +5,14 @@ import { signIn } from "next-auth/react";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { TextField } from "@/components/ui/field";
+import { FormProblems, problemsOf } from "@/components/ui/form-problems";
 import { TOO_MANY_ATTEMPTS } from "@/lib/auth/throttle";
 import { signInSchema, type SignInInput } from "@/lib/validation/sign-in";
+
+const FIELDS = [
+  { name: "email", id: "email", label: "E-mail" },
+  { name: "password", id: "password", label: "Password" },
+];
 
 export function SignInForm({ callbackUrl }: { callbackUrl: string }) {
   const [failure, setFailure] = useState<string | null>(null);
@@ -31,7 +37,8 @@ export function SignInForm({ callbackUrl }: { callbackUrl: string }) {
   }
 
   return (
-    <form onSubmit={handleSubmit(onSubmit)} noValidate aria-describedby={failure ? "sign-in-failure" : undefined}>
+    <form onSubmit={handleSubmit(onSubmit, () => setFailure(null))} noValidate aria-describedby={failure ? "sign-in-failure" : undefined}>
+      <FormProblems id="sign-in-problems" title="Not signed in" problems={problemsOf(FIELDS, errors)} />
       <div role="alert" id="sign-in-failure" className={failure ? "mb-5 rounded-plate border-l-8 border-ember bg-ember-soft p-3 font-bold" : "sr-only"}>
         {failure}
       </div>

@@ -5,6 +5,7 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm, useWatch, type Resolver } from "react-hook-form";
 import { SelectField, TextField } from "@/components/ui/field";
+import { FormProblems, problemsOf } from "@/components/ui/form-problems";
 import { ROOM_USES, type RoomUse } from "@/lib/air/ventilation";
 import { cfmToLitresPerSecond, feetToMetres, litresPerSecondToCfm, metresToFeet } from "@/lib/air/units";
 import { ROOM_USE_LABELS } from "@/lib/rooms/labels";
@@ -32,6 +33,20 @@ export interface RoomFormProps {
 }
 
 const LENGTH_FIELDS = ["length", "width", "ceiling"] as const;
+
+/** The form's fields in page order, for the list of what to fix. */
+const FIELD_IDS = [
+  { name: "name", id: "room-name", label: "Room name" },
+  { name: "use", id: "room-use", label: "Used as" },
+  { name: "length", id: "room-length", label: "Floor length" },
+  { name: "width", id: "room-width", label: "Floor width" },
+  { name: "ceiling", id: "room-ceiling", label: "Ceiling height" },
+  { name: "occupancy", id: "room-occupancy", label: "Design occupancy" },
+  { name: "outdoorAir", id: "room-outdoor-air", label: "Outdoor air" },
+  { name: "airCleaners", id: "room-air-cleaners", label: "Portable air cleaners" },
+  { name: "cadrEach", id: "room-cadr", label: "CADR of each air cleaner" },
+  { name: "merv", id: "room-merv", label: "Filter rating (MERV)" },
+];
 const FLOW_FIELDS = ["outdoorAir", "cadrEach"] as const;
 
 // Enough decimals that a value converted and converted back is the one typed.
@@ -131,7 +146,8 @@ export function RoomForm({ room, schools = [] }: RoomFormProps) {
   }
 
   return (
-    <form onSubmit={handleSubmit(onSubmit)} noValidate className="max-w-2xl" aria-label={room ? `Edit ${room.name}` : "Add a room"}>
+    <form onSubmit={handleSubmit(onSubmit, () => setStatus(null))} noValidate className="max-w-2xl" aria-label={room ? `Edit ${room.name}` : "Add a room"}>
+      <FormProblems id={room ? `room-${room.id}-problems` : "room-new-problems"} title={room ? "Not saved" : "Not added"} problems={problemsOf(FIELD_IDS, errors)} />
       {!room ? (
         <SelectField
           id="room-school"
@@ -161,7 +177,7 @@ export function RoomForm({ room, schools = [] }: RoomFormProps) {
             ] as const
           ).map(([value, label]) => (
             <label key={value} className="flex min-h-11 items-center gap-2">
-              <input type="radio" name="units-choice" value={value} checked={units === value} onChange={() => switchUnits(value)} className="h-5 w-5" />
+              <input type="radio" name="units-choice" value={value} checked={units === value} onChange={() => switchUnits(value)} className="h-5 w-5 accent-harbour" />
               {label}
             </label>
           ))}
@@ -195,7 +211,7 @@ export function RoomForm({ room, schools = [] }: RoomFormProps) {
       </div>
       <div className="mb-5">
         <label className="flex min-h-11 items-center gap-2 font-bold">
-          <input type="checkbox" className="h-5 w-5" {...register("windowsOpen")} />
+          <input type="checkbox" className="h-5 w-5 accent-harbour" {...register("windowsOpen")} />
           Windows open
         </label>
       </div>

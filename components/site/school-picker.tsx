@@ -5,7 +5,7 @@ export function SchoolPicker({ schools, current, idSuffix = "header" }: { school
   const id = `school-picker-${idSuffix}`;
   return (
     <form action="/schools" method="get" className="flex flex-wrap items-end gap-2" role="search" aria-label="Choose your school">
-      <div>
+      <div className="min-w-0 max-w-full">
         <label htmlFor={id} className="block text-sm font-bold">
           Your school
         </label>
@@ -13,7 +13,7 @@ export function SchoolPicker({ schools, current, idSuffix = "header" }: { school
           id={id}
           name="school"
           defaultValue={current ?? ""}
-          className="min-h-11 rounded-plate border-2 border-ink-soft bg-white px-2 py-1 text-base text-ink"
+          className="min-h-11 max-w-full rounded-plate border-2 border-ink-soft bg-white px-2 py-1 text-base text-ink"
         >
           <option value="">Choose a school…</option>
           {schools.map((s) => (

@@ -5,9 +5,17 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { createAccountAction } from "@/app/(staff)/staff/users/actions";
 import { SelectField, TextField } from "@/components/ui/field";
+import { FormProblems, problemsOf } from "@/components/ui/form-problems";
 import { ROLES } from "@/db/types";
 import { ROLE_LABELS } from "@/lib/auth/roles";
 import { newStaffAccountSchema, type NewStaffAccount, type NewStaffAccountInput } from "@/lib/validation/staff-account";
+
+const FIELDS = [
+  { name: "name", id: "new-name", label: "Name" },
+  { name: "email", id: "new-email", label: "E-mail" },
+  { name: "role", id: "new-role", label: "Role" },
+  { name: "password", id: "new-password", label: "First password" },
+];
 
 export function NewAccountForm() {
   const [status, setStatus] = useState<{ ok: boolean; message: string } | null>(null);
@@ -32,7 +40,8 @@ export function NewAccountForm() {
   }
 
   return (
-    <form onSubmit={handleSubmit(onSubmit)} noValidate className="max-w-md">
+    <form onSubmit={handleSubmit(onSubmit, () => setStatus(null))} noValidate className="max-w-md">
+      <FormProblems id="new-account-problems" title="Not added" problems={problemsOf(FIELDS, errors)} />
       <TextField id="new-name" label="Name" autoComplete="off" error={errors.name?.message} {...register("name")} />
       <TextField id="new-email" label="E-mail" type="email" autoComplete="off" error={errors.email?.message} {...register("email")} />
       <SelectField

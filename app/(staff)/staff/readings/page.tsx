@@ -89,31 +89,33 @@ export default async function ReadingsPage() {
         {canSet ? (
           <AirSettingsForm settings={settings} />
         ) : (
-          <dl className="grid max-w-2xl gap-2 sm:grid-cols-2">
-            <div>
-              <dt className="font-bold">CO2 level minutes are counted above</dt>
-              <dd>{formatWhole(settings.co2ThresholdPpm)} ppm</dd>
-            </div>
-            <div>
-              <dt className="font-bold">School hours</dt>
-              <dd>
-                {formatClock(settings.occupiedStartMinute)} to {formatClock(settings.occupiedEndMinute)}
-              </dd>
-            </div>
-            <div>
-              <dt className="font-bold">Outdoor CO2 for the estimate</dt>
-              <dd>{formatWhole(settings.co2OutdoorPpm)} ppm</dd>
-            </div>
-            <div>
-              <dt className="font-bold">Public seat counts</dt>
-              <dd>{formatUpToOne(settings.seatingSpacingFt)} ft apart</dd>
-            </div>
-            <div>
-              <dt className="font-bold">Air distribution effectiveness (Ez)</dt>
-              <dd>{formatOneDecimal(settings.zoneAirDistributionEffectiveness)}</dd>
-            </div>
-            <p className="text-sm text-ink-soft sm:col-span-2">An administrator can change these.</p>
-          </dl>
+          <>
+            <dl className="grid max-w-2xl gap-2 sm:grid-cols-2">
+              <div>
+                <dt className="font-bold">CO2 level minutes are counted above</dt>
+                <dd>{formatWhole(settings.co2ThresholdPpm)} ppm</dd>
+              </div>
+              <div>
+                <dt className="font-bold">School hours</dt>
+                <dd>
+                  {formatClock(settings.occupiedStartMinute)} to {formatClock(settings.occupiedEndMinute)}
+                </dd>
+              </div>
+              <div>
+                <dt className="font-bold">Outdoor CO2 for the estimate</dt>
+                <dd>{formatWhole(settings.co2OutdoorPpm)} ppm</dd>
+              </div>
+              <div>
+                <dt className="font-bold">Public seat counts</dt>
+                <dd>{formatUpToOne(settings.seatingSpacingFt)} ft apart</dd>
+              </div>
+              <div>
+                <dt className="font-bold">Air distribution effectiveness (Ez)</dt>
+                <dd>{formatOneDecimal(settings.zoneAirDistributionEffectiveness)}</dd>
+              </div>
+            </dl>
+            <p className="mt-2 text-sm text-ink-soft">An administrator can change these.</p>
+          </>
         )}
       </section>
     </>
