@@ -15,6 +15,7 @@ export default async function sitemap(): Promise<MetadataRoute.Sitemap> {
     { url: `${base}/` },
     { url: `${base}/schools` },
     { url: `${base}/ask` },
+    { url: `${base}/answers` },
     ...DISTRICT_TOPICS.map((t) => ({ url: `${base}/district/${t.slug}` })),
     ...schools.flatMap((s) => [{ url: `${base}/schools/${s.slug}` }, ...SCHOOL_TOPICS.map((t) => ({ url: `${base}/schools/${s.slug}/${t.slug}` }))]),
     ...answers.map((a) => ({ url: `${base}${answerPath(a.id)}`, lastModified: a.updatedAt })),

@@ -437,4 +437,37 @@ We **never name** a child or a staff member, and we ask families not to guess. T
 Students who arrive after the first bell also sign in at the welcome desk. After the first bell, all doors except the main entrance are locked. You can follow the entrance work on [the Eastmere building page](/schools/eastmere/building).`,
     publishedAt: "2026-11-25T14:00:00.000Z",
   },
+  {
+    school: "corrow-ridge",
+    topic: "air",
+    question: "What was done to the ventilation at Corrow Ridge, and how do you know it works?",
+    answer: `Over the past year every classroom at Corrow Ridge got a new **unit ventilator**, the cabinet under the windows that brings in outdoor air, filters it and heats it. The gym, cafeteria, library and main office get their air from the **central air handler** above the gym, whose filters we raised to **MERV-13**.
+
+After the work, licensed technicians measured the outdoor air each unit delivers and adjusted it. Our facilities staff compare those figures with what the ventilation standard asks for each room and its number of students. Each classroom also has a CO2 sensor; when a reading passes 800 ppm, the unit lets in more outdoor air, and staff get an alert if it stays high.
+
+Rooms whose units cannot take MERV-13 filters have a portable air cleaner with a HEPA filter. You can see each room's figures on [the Corrow Ridge air page](/schools/corrow-ridge/air). If your child has asthma or another breathing condition, please talk with your doctor and the school nurse.`,
+    publishedAt: "2026-11-17T15:00:00.000Z",
+  },
+  {
+    school: null,
+    topic: "distancing",
+    question: "Does my child have to wear a face covering at school?",
+    answer: `Not at the moment. Face coverings are welcome at every school, and no one is asked to take one off. We follow the **local health department**: if it asks schools to use face coverings again, for everyone or for one class after a reported case, we will tell you by letter and e-mail before the change starts.
+
+A child who starts to feel sick at school waits in the nurse's office, and the nurse may offer a face covering while they wait to go home. The front office keeps spare ones for anyone who asks.
+
+If you have a question about your own child's health and face coverings, please ask your doctor or the school nurse.`,
+    publishedAt: "2026-11-26T15:00:00.000Z",
+  },
+  {
+    school: null,
+    topic: "cleaning",
+    question: "Is there hand sanitizer in the classrooms, and is it safe for young children?",
+    answer: `Yes. Every classroom, the cafeteria and each entrance has a wall dispenser of **alcohol-based hand sanitizer with at least 60% alcohol**, the kind the CDC recommends when soap and water are not at hand. Washing with soap and water is still best, and students wash their hands before lunch, after the restroom and whenever their hands look dirty.
+
+In the elementary grades, children use hand sanitizer with an adult nearby, and the refill bottles are kept where children cannot reach them. Rub it in until the hands are dry.
+
+If your child's skin reacts to it, tell the school nurse and your child can wash with soap and water instead. Hand sanitizer is for hands only: custodians clean surfaces with a separate product, as [our cleaning and disinfection page](/district/cleaning-and-disinfection) explains.`,
+    publishedAt: "2026-11-16T16:00:00.000Z",
+  },
 ];

@@ -243,6 +243,17 @@ export interface Co2DailyTable {
   computed_at: Timestamp;
 }
 
+/** One browser's "was this helpful?" on a published answer; the browser is known only by the SHA-256 of its cookie. */
+export interface AnswerVoteTable {
+  id: Generated<number>;
+  answer_id: number;
+  voter_hash: string;
+  /** 1: it helped; 0: it did not. */
+  helpful: Flag;
+  created_at: Timestamp;
+  updated_at: Timestamp;
+}
+
 export interface Co2ImportTable {
   id: Generated<number>;
   file_name: string;
@@ -273,6 +284,7 @@ export interface Database {
   co2_readings: Co2ReadingTable;
   co2_daily: Co2DailyTable;
   co2_imports: Co2ImportTable;
+  answer_votes: AnswerVoteTable;
   question_drafts: QuestionDraftTable;
   question_notes: QuestionNoteTable;
   reply_snippets: ReplySnippetTable;

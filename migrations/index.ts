@@ -10,6 +10,7 @@ import * as m0008 from "./0008_submission_attempts";
 import * as m0009 from "./0009_question_replies";
 import * as m0010 from "./0010_room_air";
 import * as m0011 from "./0011_co2_readings";
+import * as m0012 from "./0012_answer_votes";
 import * as m0013 from "./0013_desk";
 
 /**
@@ -29,5 +30,6 @@ export const MIGRATIONS: Record<string, Migration> = {
   "0009_question_replies": m0009,
   "0010_room_air": m0010,
   "0011_co2_readings": m0011,
+  "0012_answer_votes": m0012,
   "0013_desk": m0013,
 };

@@ -17,10 +17,12 @@ if (files.length === 0) {
   process.exit(1);
 }
 
+// Benchmarks that need the app share one build per run (scripts/bench/lib/app-server.ts).
+const runId = `${process.pid}-${Date.now()}`;
 let failed = false;
 for (const file of files) {
   console.log(`\n▶ ${file}`);
-  const run = spawnSync(process.execPath, ["--import", "tsx", join(dir, file)], { stdio: "inherit", env: { ...process.env, NODE_ENV: "production" } });
+  const run = spawnSync(process.execPath, ["--import", "tsx", join(dir, file)], { stdio: "inherit", env: { ...process.env, NODE_ENV: "production", BENCH_RUN_ID: process.env.BENCH_RUN_ID ?? runId } });
   if (run.status !== 0) {
     failed = true;
     console.error(`✗ ${file} exited with ${run.status ?? run.signal}`);

@@ -2,13 +2,14 @@
 
 import { useEffect, useRef, useState } from "react";
 import type { AnswerSuggestion } from "@/lib/answers/repository";
-import { createSuggestionIndex, type SuggestionIndex } from "@/lib/answers/suggest";
-import { QUESTION_MIN_LENGTH } from "@/lib/validation/question";
+import type { SuggestionIndex } from "@/lib/answers/suggest";
+import { QUESTION_MIN_LENGTH } from "@/lib/validation/question-limits";
 
 const DEBOUNCE_MS = 300;
 
 async function loadIndex(): Promise<SuggestionIndex> {
-  const response = await fetch("/api/answers/suggestions");
+  // The fuzzy matcher comes with the answers, not with the page.
+  const [response, { createSuggestionIndex }] = await Promise.all([fetch("/api/answers/suggestions"), import("@/lib/answers/suggest")]);
   if (!response.ok) throw new Error(`suggestions answered ${response.status}`);
   const data = (await response.json()) as { answers?: AnswerSuggestion[] };
   return createSuggestionIndex(Array.isArray(data.answers) ? data.answers : []);

@@ -1,22 +1,14 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import { startTransition, useActionState, type BaseSyntheticEvent, useEffect, useRef, useState, useSyncExternalStore } from "react";
-import { useForm, useWatch } from "react-hook-form";
+import { useForm, useWatch, type Resolver } from "react-hook-form";
 import { askAction, type AskFormState } from "@/app/(public)/ask/actions";
 import { CheckboxField, SelectField, TextAreaField, TextField } from "@/components/ui/field";
 import { TOPIC_LABELS } from "@/lib/questions/labels";
 import { REPLY_LANGUAGES } from "@/lib/questions/languages";
 import { QUESTION_TOPICS } from "@/lib/questions/state-machine";
-import {
-  askFormSchema,
-  DISTRICT_WIDE,
-  NAME_MAX_LENGTH,
-  QUESTION_MAX_LENGTH,
-  ROOM_MAX_LENGTH,
-  type AskFormInput,
-  type AskFormValues,
-} from "@/lib/validation/question";
+import type { AskFormInput, AskFormValues } from "@/lib/validation/question";
+import { DISTRICT_WIDE, NAME_MAX_LENGTH, QUESTION_MAX_LENGTH, ROOM_MAX_LENGTH } from "@/lib/validation/question-limits";
 import { AnswerSuggestions } from "./answer-suggestions";
 
 export interface AskFormProps {
@@ -46,6 +38,37 @@ const HONEYPOT_MESSAGE = "This looked like an automated message, so it was not s
 const INITIAL_STATE: AskFormState = { status: "idle" };
 
 const subscribeNothing = () => () => undefined;
+
+type AskResolver = Resolver<AskFormInput, unknown, AskFormValues>;
+let schemaResolver: Promise<AskResolver> | undefined;
+
+/**
+ * The shared zod schema (the same one the server action checks) is most of this form's code, so it
+ * is fetched when the form is first focused rather than with the page. If it cannot be fetched, the
+ * form is sent unchecked and the server's checks answer instead.
+ */
+function loadSchemaResolver(): Promise<AskResolver> {
+  if (!schemaResolver) {
+    schemaResolver = Promise.all([import("@hookform/resolvers/zod"), import("@/lib/validation/question")]).then(
+      ([{ zodResolver }, { askFormSchema }]) => zodResolver(askFormSchema),
+    );
+    // A failed download is tried again on the next focus or check.
+    schemaResolver.catch(() => {
+      schemaResolver = undefined;
+    });
+  }
+  return schemaResolver;
+}
+
+const askResolver: AskResolver = async (values, context, options) => {
+  let resolver: AskResolver;
+  try {
+    resolver = await loadSchemaResolver();
+  } catch {
+    return { values: values as AskFormValues, errors: {} };
+  }
+  return resolver(values, context, options);
+};
 
 function text(value: string | boolean | undefined, fallback = ""): string {
   return typeof value === "string" ? value : fallback;
@@ -77,7 +100,7 @@ export function AskForm({ schools, initialSchool, initialTopic }: AskFormProps) 
     control,
     formState: { errors },
   } = useForm<AskFormInput, unknown, AskFormValues>({
-    resolver: zodResolver(askFormSchema),
+    resolver: askResolver,
     defaultValues: { ...initial, website: "" },
     shouldFocusError: false,
   });
@@ -119,6 +142,7 @@ export function AskForm({ schools, initialSchool, initialTopic }: AskFormProps) 
     <form
       action={formAction}
       onSubmit={handleSubmit(onValid, () => setFocusRequest((n) => n + 1))}
+      onFocus={() => void loadSchemaResolver().catch(() => undefined)}
       noValidate
       aria-describedby="ask-required-note"
       className="relative"

@@ -1,5 +1,6 @@
 import Fuse from "fuse.js";
 import type { AnswerSuggestion } from "./repository";
+import { foldText } from "./text";
 
 /** Words that say nothing about what a question is about. */
 const STOP_WORDS = new Set(
@@ -42,10 +43,7 @@ const MIN_SCORE = 0.3;
 
 /** The words of a question worth matching on: lower case, no stop words, short forms spelled out. */
 export function significantWords(text: string): string[] {
-  const words = text
-    .toLowerCase()
-    .normalize("NFKD")
-    .replace(/\p{M}/gu, "")
+  const words = foldText(text)
     .replace(/['’]s\b/g, "")
     .match(/[\p{L}\p{N}]+(?:-[\p{L}\p{N}]+)*/gu);
   const out = new Set<string>();

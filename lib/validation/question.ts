@@ -1,12 +1,9 @@
 import { z } from "zod";
 import { canonicalLanguageTag, DEFAULT_REPLY_LANGUAGE } from "@/lib/questions/languages";
 import { QUESTION_TOPICS } from "@/lib/questions/state-machine";
+import { NAME_MAX_LENGTH, QUESTION_MAX_LENGTH, QUESTION_MIN_LENGTH, ROOM_MAX_LENGTH } from "./question-limits";
 
-export const DISTRICT_WIDE = "district";
-export const QUESTION_MIN_LENGTH = 10;
-export const QUESTION_MAX_LENGTH = 2_000;
-export const NAME_MAX_LENGTH = 100;
-export const ROOM_MAX_LENGTH = 60;
+export { DISTRICT_WIDE, NAME_MAX_LENGTH, QUESTION_MAX_LENGTH, QUESTION_MIN_LENGTH, ROOM_MAX_LENGTH } from "./question-limits";
 
 // Control characters other than tab and line breaks, and lone UTF-16 surrogates (broken text).
 const CONTROL_IN_TEXT = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\u007F-\u009F]|\p{Cs}/u;

@@ -20,6 +20,7 @@ async function snapshot() {
     "settings",
     "building_projects",
     "published_answers",
+    "answer_votes",
     "submission_attempts",
     "question_replies",
     "co2_readings",

@@ -1,0 +1,235 @@
+"use client";
+
+import Link from "next/link";
+import { useEffect, useMemo, useRef, useState, type FormEvent, type MouseEvent } from "react";
+import { buttonClasses } from "@/components/ui/button";
+import { resultSummary } from "@/lib/answers/format";
+import { answersHref, type AnswersQuery } from "@/lib/answers/query";
+import { createAnswerSearch, DISTRICT, type AnswerSearch, type SearchIndexPayload, type SearchResult } from "@/lib/answers/search";
+import { AnswerResultList, SectionResultList } from "./result-lists";
+
+export interface AnswersSearchProps {
+  initialQuery: AnswersQuery;
+  /** The server's results for the URL: what the page shows without JavaScript and until the index has loaded. */
+  initialResult: SearchResult;
+  initialLimit: number;
+  pageSize: number;
+  schools: [slug: string, name: string][];
+  topics: [code: string, label: string][];
+  /** The versioned address of the compact index. */
+  indexUrl: string;
+}
+
+/** Screen readers hear the new count once typing pauses, not at every letter. */
+const ANNOUNCE_AFTER_MS = 800;
+
+const CONTROL = "mt-1 block w-full rounded-plate border-2 border-ink-soft bg-white px-3 py-2 text-base text-ink";
+
+async function loadIndex(url: string): Promise<AnswerSearch> {
+  const response = await fetch(url);
+  if (!response.ok) throw new Error(`the search index answered ${response.status}`);
+  return createAnswerSearch((await response.json()) as SearchIndexPayload);
+}
+
+/**
+ * The answers page's search. Without JavaScript it is a plain GET form and the list the server
+ * rendered. With JavaScript the same index is searched in the browser as the parent types, with
+ * the same ranking, and the address bar follows (?q=&school=&topic=), so the list can be shared.
+ */
+export function AnswersSearch({ initialQuery, initialResult, initialLimit, pageSize, schools, topics, indexUrl }: AnswersSearchProps) {
+  const [query, setQuery] = useState<AnswersQuery>(initialQuery);
+  const [limit, setLimit] = useState(initialLimit);
+  const [engine, setEngine] = useState<AnswerSearch | null>(null);
+  const [failed, setFailed] = useState(false);
+  const [announcement, setAnnouncement] = useState("");
+  const touched = useRef(false);
+
+  useEffect(() => {
+    let live = true;
+    loadIndex(indexUrl)
+      .then((e) => live && setEngine(e))
+      // The form still works: it is sent to the server, which answers with the same results.
+      .catch(() => live && setFailed(true));
+    return () => {
+      live = false;
+    };
+  }, [indexUrl]);
+
+  const result = useMemo(
+    () => (engine ? engine.search(query, { answerLimit: limit }) : initialResult),
+    [engine, query, limit, initialResult],
+  );
+  const stale = !engine && (query.q !== initialQuery.q || query.school !== initialQuery.school || query.topic !== initialQuery.topic);
+  const schoolName = schools.find(([slug]) => slug === result.query.school)?.[1] ?? (result.query.school === DISTRICT ? "every school" : undefined);
+  const topicLabel = topics.find(([code]) => code === result.query.topic)?.[1];
+  const summary = resultSummary(result, { school: schoolName, topic: topicLabel });
+
+  useEffect(() => {
+    if (!touched.current || stale) return;
+    const timer = setTimeout(() => setAnnouncement(summary), ANNOUNCE_AFTER_MS);
+    return () => clearTimeout(timer);
+  }, [summary, stale]);
+
+  function update(change: Partial<AnswersQuery>, nextLimit = pageSize) {
+    touched.current = true;
+    const next = { ...query, ...change };
+    setQuery(next);
+    setLimit(nextLimit);
+    window.history.replaceState(null, "", answersHref(next, nextLimit > pageSize ? { shown: String(nextLimit) } : {}));
+  }
+
+  function onSubmit(event: FormEvent<HTMLFormElement>) {
+    // Until the index has loaded, the form goes to the server like any form.
+    if (engine) event.preventDefault();
+  }
+
+  function showMore(event: MouseEvent<HTMLAnchorElement>) {
+    if (!engine) return;
+    event.preventDefault();
+    update({}, limit + pageSize);
+  }
+
+  const filtered = Boolean(query.q || query.school || query.topic);
+  const more = result.totalAnswers - result.answers.length;
+
+  return (
+    <div>
+      <form role="search" aria-label="Find an answer" method="get" action="/answers" onSubmit={onSubmit} className="rounded-plate border-2 border-harbour-line bg-white p-4 sm:p-5">
+        <label htmlFor="answers-q" className="block font-bold">
+          Search the answers
+        </label>
+        <p id="answers-q-hint" className="text-sm text-ink-soft">
+          Use your own words. Short forms such as “AC” and small spelling mistakes are fine.
+        </p>
+        <input
+          id="answers-q"
+          type="search"
+          name="q"
+          value={query.q}
+          onChange={(e) => update({ q: e.target.value })}
+          maxLength={200}
+          autoComplete="off"
+          spellCheck={false}
+          aria-describedby="answers-q-hint"
+          aria-controls="answers-results"
+          className={CONTROL}
+        />
+        <div className="mt-4 grid gap-4 sm:grid-cols-2">
+          <div>
+            <label htmlFor="answers-school" className="block font-bold">
+              School
+            </label>
+            <p id="answers-school-hint" className="text-sm text-ink-soft">
+              A school’s list also has the answers for every school.
+            </p>
+            <select
+              id="answers-school"
+              name="school"
+              value={query.school}
+              onChange={(e) => update({ school: e.target.value })}
+              aria-describedby="answers-school-hint"
+              className={CONTROL}
+            >
+              <option value="">Any school</option>
+              {schools.map(([slug, name]) => (
+                <option key={slug} value={slug}>
+                  {name}
+                </option>
+              ))}
+              <option value={DISTRICT}>Only answers for every school</option>
+            </select>
+          </div>
+          <div>
+            <label htmlFor="answers-topic" className="block font-bold">
+              Topic
+            </label>
+            <p id="answers-topic-hint" className="text-sm text-ink-soft">
+              What the question is about.
+            </p>
+            <select
+              id="answers-topic"
+              name="topic"
+              value={query.topic}
+              onChange={(e) => update({ topic: e.target.value })}
+              aria-describedby="answers-topic-hint"
+              className={CONTROL}
+            >
+              <option value="">Any topic</option>
+              {topics.map(([code, label]) => (
+                <option key={code} value={code}>
+                  {label}
+                </option>
+              ))}
+            </select>
+          </div>
+        </div>
+        <div className="mt-4 flex flex-wrap items-center gap-x-5 gap-y-2">
+          <button type="submit" className={buttonClasses("primary")}>
+            Search
+          </button>
+          {filtered ? (
+            <Link
+              href="/answers"
+              prefetch={false}
+              onClick={(e) => {
+                if (!engine) return;
+                e.preventDefault();
+                update({ q: "", school: "", topic: "" });
+              }}
+            >
+              Show every answer
+            </Link>
+          ) : null}
+          {failed ? <span className="text-sm text-ink-soft">Searching as you type is not available right now; press Search.</span> : null}
+        </div>
+      </form>
+
+      <p className="sr-only" role="status" aria-live="polite" aria-atomic="true">
+        {announcement}
+      </p>
+
+      <div id="answers-results" className="mt-8 grid gap-x-10 gap-y-8 lg:grid-cols-[minmax(0,1fr)_22rem]" aria-busy={stale}>
+        <section aria-labelledby="answers-count">
+          <h2 id="answers-count" className="text-xl" data-testid="answers-count">
+            {summary}
+          </h2>
+          {stale ? <p className="mt-1 text-sm text-ink-soft">Getting the search ready…</p> : null}
+          {!result.matchedAll ? (
+            <p className="mt-2">No answer has all of your words, so these have the most of them.</p>
+          ) : null}
+          {result.answers.length > 0 ? (
+            <div className="mt-4">
+              <AnswerResultList answers={result.answers} />
+            </div>
+          ) : (
+            <p className="mt-4">
+              We have not published an answer to that yet. <a href={`/ask${query.topic ? `?topic=${encodeURIComponent(query.topic)}` : ""}`}>Ask us your question</a> and we will reply by e-mail.
+            </p>
+          )}
+          {more > 0 ? (
+            <p className="mt-6">
+              <a href={answersHref(query, { shown: String(limit + pageSize) })} onClick={showMore} className={buttonClasses("secondary")}>
+                Show {Math.min(more, pageSize)} more {more === 1 ? "answer" : "answers"}
+              </a>
+            </p>
+          ) : null}
+        </section>
+        {result.sections.length > 0 ? (
+          <section aria-labelledby="answers-pages" className="self-start">
+            <h2 id="answers-pages" className="text-xl">
+              On our pages
+            </h2>
+            <p className="mt-1 text-sm text-ink-soft">
+              {result.totalSections > result.sections.length
+                ? `The ${result.sections.length} best of ${result.totalSections} parts that match.`
+                : "Parts of the school and district pages that match."}
+            </p>
+            <div className="mt-3">
+              <SectionResultList sections={result.sections} />
+            </div>
+          </section>
+        ) : null}
+      </div>
+    </div>
+  );
+}
