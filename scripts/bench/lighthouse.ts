@@ -114,14 +114,17 @@ async function main(): Promise<void> {
     for (const preset of presets) {
       for (const page of pages) {
         const url = `${base}${page.path}`;
-        const browser = await startChromium();
         let lhr;
-        try {
-          const flags = { port: browser.port, output: "json" as const, logLevel: "error" as const, onlyCategories: ["performance", "accessibility"] };
-          const result = await lighthouse(url, flags, preset.config);
-          lhr = result?.lhr;
-        } finally {
-          await browser.stop();
+        // A trace that failed to record (NO_FCP, NO_NAVSTART on a busy host) gets one more try.
+        for (let attempt = 0; attempt < 2 && (!lhr || lhr.runtimeError); attempt += 1) {
+          const browser = await startChromium();
+          try {
+            const flags = { port: browser.port, output: "json" as const, logLevel: "error" as const, onlyCategories: ["performance", "accessibility"] };
+            const result = await lighthouse(url, flags, preset.config);
+            lhr = result?.lhr;
+          } finally {
+            await browser.stop();
+          }
         }
         if (!lhr) throw new Error(`Lighthouse returned no result for ${url}`);
         const file = `lighthouse-${preset.config ? "desktop" : "phone"}-${page.name.replace(/\W+/g, "-").replace(/-$/, "")}.json`;

@@ -273,3 +273,12 @@ describe("sections of the MDX pages", () => {
     }
   });
 });
+
+describe("the highlight's colours", () => {
+  it("meet WCAG 2.1 AA contrast (4.5:1, SC 1.4.3): deep harbour on harbour soft, as components/answers/highlighted.tsx uses them", async () => {
+    const { contrastRatio } = await import("@/lib/contrast");
+    const config = (await import("@/tailwind.config")).default;
+    const colors = config.theme!.extend!.colors as Record<string, Record<string, string>>;
+    expect(contrastRatio(colors.harbour!.deep!, colors.harbour!.soft!)).toBeGreaterThanOrEqual(4.5);
+  });
+});

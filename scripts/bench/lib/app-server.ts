@@ -23,6 +23,8 @@ export interface AppServer {
   url: string;
   /** The SQLite file this server uses, a fresh copy of the seeded one. */
   databasePath: string;
+  /** The server's process id (`next start` serves from the process it starts in). */
+  pid: number;
   /** The last lines the server printed, for error messages. */
   logTail(lines?: number): string;
 }
@@ -234,7 +236,8 @@ export async function withAppServer<T>(name: string, body: (app: AppServer) => P
     await waitFor(`${url}${FLOOR_PATH}`, next, "next start", serverLog);
     console.log(`server ready on ${url} in ${((performance.now() - started) / 1000).toFixed(1)} s (log: ${serverLog})`);
 
-    return await body({ url, databasePath, logTail: (lines) => tail(serverLog, lines) });
+    if (next.pid === undefined) throw new Error("next start has no process id");
+    return await body({ url, databasePath, pid: next.pid, logTail: (lines) => tail(serverLog, lines) });
   } finally {
     for (const child of children.reverse()) await stopChild(child);
   }
