@@ -4,8 +4,10 @@ import Link from "next/link";
 import { useEffect, useMemo, useRef, useState, type FormEvent, type MouseEvent } from "react";
 import { buttonClasses } from "@/components/ui/button";
 import { resultSummary } from "@/lib/answers/format";
-import { answersHref, type AnswersQuery } from "@/lib/answers/query";
-import { createAnswerSearch, DISTRICT, type AnswerSearch, type SearchIndexPayload, type SearchResult } from "@/lib/answers/search";
+import { DISTRICT } from "@/lib/answers/constants";
+import { answersHref } from "@/lib/answers/href";
+import type { AnswersQuery } from "@/lib/answers/query";
+import type { AnswerSearch, SearchIndexPayload, SearchResult } from "@/lib/answers/search";
 import { AnswerResultList, SectionResultList } from "./result-lists";
 
 export interface AnswersSearchProps {
@@ -25,10 +27,14 @@ const ANNOUNCE_AFTER_MS = 800;
 
 const CONTROL = "mt-1 block w-full rounded-plate border-2 border-ink-soft bg-white px-3 py-2 text-base text-ink";
 
+/**
+ * The engine (Fuse.js and the ranking) and the index are fetched together once the page is
+ * showing, so neither weighs on the first load; until they arrive the form goes to the server.
+ */
 async function loadIndex(url: string): Promise<AnswerSearch> {
-  const response = await fetch(url);
+  const [engine, response] = await Promise.all([import("@/lib/answers/search"), fetch(url)]);
   if (!response.ok) throw new Error(`the search index answered ${response.status}`);
-  return createAnswerSearch((await response.json()) as SearchIndexPayload);
+  return engine.createAnswerSearch((await response.json()) as SearchIndexPayload);
 }
 
 /**
@@ -40,11 +46,16 @@ export function AnswersSearch({ initialQuery, initialResult, initialLimit, pageS
   const [query, setQuery] = useState<AnswersQuery>(initialQuery);
   const [limit, setLimit] = useState(initialLimit);
   const [engine, setEngine] = useState<AnswerSearch | null>(null);
+  const [wanted, setWanted] = useState(false);
   const [failed, setFailed] = useState(false);
   const [announcement, setAnnouncement] = useState("");
   const touched = useRef(false);
 
+  // The engine and index are fetched when the parent turns to the search (focus, a tap or a
+  // pointer on the form), not with the page: a family reading the list on a phone downloads and
+  // runs none of it, and the first paint is not held up by building the engine.
   useEffect(() => {
+    if (!wanted) return;
     let live = true;
     loadIndex(indexUrl)
       .then((e) => live && setEngine(e))
@@ -53,7 +64,10 @@ export function AnswersSearch({ initialQuery, initialResult, initialLimit, pageS
     return () => {
       live = false;
     };
-  }, [indexUrl]);
+  }, [wanted, indexUrl]);
+  const want = () => {
+    if (!wanted) setWanted(true);
+  };
 
   const result = useMemo(
     () => (engine ? engine.search(query, { answerLimit: limit }) : initialResult),
@@ -94,7 +108,16 @@ export function AnswersSearch({ initialQuery, initialResult, initialLimit, pageS
 
   return (
     <div>
-      <form role="search" aria-label="Find an answer" method="get" action="/answers" onSubmit={onSubmit} className="rounded-plate border-2 border-harbour-line bg-white p-4 sm:p-5">
+      <form
+        role="search"
+        aria-label="Find an answer"
+        method="get"
+        action="/answers"
+        onSubmit={onSubmit}
+        onFocus={want}
+        onPointerDown={want}
+        onPointerEnter={want}
+        className="rounded-plate border-2 border-harbour-line bg-white p-4 sm:p-5">
         <label htmlFor="answers-q" className="block font-bold">
           Search the answers
         </label>

@@ -1,6 +1,8 @@
 import { z } from "zod";
 import { QUESTION_TOPICS } from "@/lib/questions/state-machine";
-import { DISTRICT, MAX_QUERY_LENGTH } from "./search";
+import { DISTRICT, MAX_QUERY_LENGTH } from "./constants";
+
+export { answersHref } from "./href";
 
 /** What `?q=&school=&topic=` may hold, on the answers page and in GET /api/answers. Empty means "any". */
 export const answersQuerySchema = z.object({
@@ -50,15 +52,4 @@ export function parseAnswersQuery(
     query.school = "";
   }
   return Object.keys(errors).length ? { ok: false, errors, query } : { ok: true, query };
-}
-
-/** The answers page URL for a query: only the parameters in use, so a shared link stays short. */
-export function answersHref(query: Partial<AnswersQuery>, extra: Record<string, string> = {}): string {
-  const params = new URLSearchParams();
-  if (query.q) params.set("q", query.q);
-  if (query.school) params.set("school", query.school);
-  if (query.topic) params.set("topic", query.topic);
-  for (const [k, v] of Object.entries(extra)) params.set(k, v);
-  const search = params.toString();
-  return search ? `/answers?${search}` : "/answers";
 }

@@ -1,4 +1,5 @@
 import Fuse from "fuse.js";
+import { DISTRICT, MAX_QUERY_LENGTH } from "./constants";
 import { forEachTerm, STOP_WORDS, stem, termsOf, wordSpans, words, type WordSpan } from "./text";
 
 /**
@@ -16,12 +17,11 @@ import { forEachTerm, STOP_WORDS, stem, termsOf, wordSpans, words, type WordSpan
  * all, the documents with the most are shown, and the result says so.
  */
 
+export { DISTRICT, MAX_QUERY_LENGTH };
+
 export const SEARCH_INDEX_FORMAT = 1;
-/** Stands for "every school" in filters, the API and the index. */
-export const DISTRICT = "district";
 /** How much of an answer or section is shown under its title, in characters. */
 export const EXCERPT_LENGTH = 170;
-export const MAX_QUERY_LENGTH = 200;
 const MAX_CONCEPTS = 12;
 export const DEFAULT_SECTION_LIMIT = 6;
 

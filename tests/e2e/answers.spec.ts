@@ -26,10 +26,14 @@ async function tabTo(page: Page, selector: string, maxPresses = 60): Promise<voi
   throw new Error(`could not reach ${selector} with the Tab key`);
 }
 
-/** Opens /answers and waits until the browser has its search index, so typing searches in the page. */
+/**
+ * Opens /answers, turns to the search (focus, which is what makes the page fetch the engine and
+ * its index) and waits until the browser has them, so typing searches in the page.
+ */
 async function openWithIndex(page: Page, path = "/answers"): Promise<void> {
   const index = page.waitForResponse((r) => r.url().includes("/api/answers/search-index") && r.status() === 200);
   await page.goto(path);
+  await page.getByRole("searchbox", { name: "Search the answers" }).focus();
   await index;
   // One more frame, so the engine is in React state before the test types.
   await page.evaluate(() => new Promise((resolve) => requestAnimationFrame(() => resolve(null))));
@@ -62,6 +66,26 @@ test("the page lists every published answer, newest first", async ({ page }) => 
   expect(days.length).toBeGreaterThanOrEqual(12);
   expect([...days].sort().reverse()).toEqual(days);
   await expect(page.getByTestId("answers-count")).toHaveText(`${live.n} answers.`);
+});
+
+test("the search engine and its index are fetched only when the visitor turns to the search", async ({ page }) => {
+  const fetched: string[] = [];
+  page.on("request", (r) => {
+    if (r.url().includes("/api/answers/search-index")) fetched.push(r.url());
+  });
+  await page.goto("/answers");
+  await page.waitForLoadState("networkidle");
+  // Reading the list costs nothing more than the page itself.
+  expect(fetched).toEqual([]);
+  await expect(page.getByTestId("answers-count")).toHaveText(/^\d+ answers\.$/);
+
+  const index = page.waitForResponse((r) => r.url().includes("/api/answers/search-index") && r.status() === 200);
+  await page.getByRole("searchbox", { name: "Search the answers" }).pressSequentially("generator", { delay: 20 });
+  await index;
+  // What was typed while the engine arrived is searched once it is there, in the page.
+  await expect(page.getByTestId("answers-count")).toContainText("matching “generator”");
+  await expect(page).toHaveURL(/\/answers\?q=generator$/);
+  expect(fetched).toHaveLength(1);
 });
 
 test("typing searches as you type and puts the search in the address, without loading a new page", async ({ page }) => {
@@ -224,8 +248,11 @@ test("a page section in the results opens at its heading", async ({ page }) => {
 });
 
 test("a keyboard-only search: Tab to the box, type, Tab to a result, Enter opens it", async ({ page }) => {
-  await openWithIndex(page);
+  await page.goto("/answers");
+  // Reaching the box with the Tab key is what fetches the search engine.
+  const index = page.waitForResponse((r) => r.url().includes("/api/answers/search-index") && r.status() === 200);
   await tabTo(page, "#answers-q");
+  await index;
   await page.keyboard.type("sanitiser");
   await expect(page).toHaveURL(/q=sanitiser/);
   const first = page.locator('[data-testid="answer-results"] h3 a').first();
