@@ -15,6 +15,22 @@ test("the home page names the district, lists the schools and has a working skip
   await expect(page.locator("#main")).toBeFocused();
 });
 
+test("the main navigation leads to every public section, the answers list among them", async ({ page }) => {
+  await page.goto("/");
+  const nav = page.getByRole("navigation", { name: "Main" });
+  expect(await nav.getByRole("link").evaluateAll((links) => links.map((a) => [a.textContent, a.getAttribute("href")]))).toEqual([
+    ["Home", "/"],
+    ["Schools", "/schools"],
+    ["Cleaning", "/district/cleaning-and-disinfection"],
+    ["If a case is reported", "/district/when-a-case-is-reported"],
+    ["Answers", "/answers"],
+    ["Ask a question", "/ask"],
+  ]);
+  await nav.getByRole("link", { name: "Answers" }).click();
+  await expect(page).toHaveURL(/\/answers$/);
+  await expect(page.getByRole("heading", { level: 1 })).toHaveText("Answers to families’ questions");
+});
+
 test("the school picker works without JavaScript", async ({ browser }) => {
   const context = await browser.newContext({ javaScriptEnabled: false });
   const page = await context.newPage();
