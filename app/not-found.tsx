@@ -1,11 +1,22 @@
 import Link from "next/link";
-import { SiteFooter } from "@/components/site/site-footer";
-import { SiteHeader } from "@/components/site/site-header";
+import { db } from "@/db/client";
+import { districtName } from "@/lib/settings/district";
 
-export default function NotFound() {
+/**
+ * The not-found page. Next sends this boundary inside the page data of every page (once per
+ * route level), so it is kept small on purpose: the district's name and the ways back, not the
+ * full site header and footer, which would otherwise travel two or three extra times with each
+ * school page.
+ */
+export default async function NotFound() {
+  const district = await districtName(db());
   return (
     <>
-      <SiteHeader />
+      <header className="border-b-4 border-harbour bg-paper-deep px-gutter py-4">
+        <Link href="/" className="text-xl font-bold text-harbour-deep">
+          {district}
+        </Link>
+      </header>
       <main id="main" tabIndex={-1} className="mx-auto w-full max-w-prose flex-1 px-gutter py-12 focus:outline-none">
         <h1 className="text-3xl">We could not find that page</h1>
         <p className="mt-4 text-lg">
@@ -18,9 +29,14 @@ export default function NotFound() {
           <li>
             <Link href="/schools">Find your school</Link>
           </li>
+          <li>
+            <Link href="/answers">Read the answers to families’ questions</Link>
+          </li>
+          <li>
+            <Link href="/ask">Ask a question</Link>
+          </li>
         </ul>
       </main>
-      <SiteFooter />
     </>
   );
 }
