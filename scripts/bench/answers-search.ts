@@ -12,6 +12,7 @@ import { loadContentSections } from "@/lib/answers/sections";
 import { markdownToPlainText } from "@/lib/markdown/parse";
 import { TOPIC_LABELS } from "@/lib/questions/labels";
 import { DEFAULT_SEARCH_SYNONYMS } from "@/lib/settings/synonyms";
+import { percentile } from "./lib/stats";
 
 const SIZES = (process.env.BENCH_ANSWER_SIZES ?? "2000,10000").split(",").map(Number);
 /** What the page asks for per keystroke: the first 50 answers and 6 sections, highlighted. */
@@ -91,10 +92,6 @@ function generate(count: number, pageTexts: string[]): Generated {
   }
   answers.reverse(); // newest first, as the index expects
   return { schools, answers };
-}
-
-function percentile(sorted: number[], p: number): number {
-  return sorted[Math.min(sorted.length - 1, Math.floor(p * sorted.length))]!;
 }
 
 async function main(): Promise<void> {

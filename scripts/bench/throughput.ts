@@ -19,6 +19,7 @@ import SQLite from "better-sqlite3";
 import { FLOOR_PATH, withAppServer } from "./lib/app-server";
 import { BROWSER_ACCEPT_ENCODING } from "./lib/http";
 import { runLoad, type LoadResult } from "./lib/load";
+import { median } from "./lib/stats";
 import { printTable } from "./lib/table";
 
 const SCHOOL_PATH = "/schools/tamsin-creek";
@@ -68,12 +69,6 @@ function cpuSeconds(pid: number): number {
 interface Measured {
   result: LoadResult;
   cpuMsPerRequest: number;
-}
-
-function median(values: number[]): number {
-  const sorted = [...values].sort((a, b) => a - b);
-  const mid = Math.floor(sorted.length / 2);
-  return sorted.length % 2 ? (sorted[mid] ?? 0) : ((sorted[mid - 1] ?? 0) + (sorted[mid] ?? 0)) / 2;
 }
 
 interface Rounds {
