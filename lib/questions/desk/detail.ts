@@ -251,39 +251,34 @@ export async function getQuestionDetail(db: DB, id: number, viewer: StaffUser, n
 
 /** Technical answers waiting for facilities, oldest request first. */
 export async function listChecks(db: DB) {
+  // Each waiting check joins the latest request for it: who asked for the check and when.
   const rows = await db
+    .with("latest_request", (qb) =>
+      qb
+        .selectFrom("question_events")
+        .select(["question_id", (eb) => eb.fn.max("id").as("event_id")])
+        .where("kind", "=", "check_requested")
+        .groupBy("question_id"),
+    )
     .selectFrom("questions")
     .leftJoin("schools", "schools.id", "questions.school_id")
-    .select(["questions.id", "reference", "topic", "body", "schools.id as schoolId", "schools.slug as schoolSlug", "schools.name as schoolName"])
-    .select((eb) => [
-      eb
-        .selectFrom("question_events")
-        .select("question_events.created_at")
-        .whereRef("question_events.question_id", "=", "questions.id")
-        .where("kind", "=", "check_requested")
-        .orderBy("question_events.id", "desc")
-        .limit(1)
-        .as("submittedAt"),
-      eb
-        .selectFrom("question_events")
-        .innerJoin("users", "users.id", "question_events.actor_id")
-        .select("users.name")
-        .whereRef("question_events.question_id", "=", "questions.id")
-        .where("kind", "=", "check_requested")
-        .orderBy("question_events.id", "desc")
-        .limit(1)
-        .as("submittedByName"),
-      eb
-        .selectFrom("question_events")
-        .select("question_events.actor_id")
-        .whereRef("question_events.question_id", "=", "questions.id")
-        .where("kind", "=", "check_requested")
-        .orderBy("question_events.id", "desc")
-        .limit(1)
-        .as("submittedById"),
+    .leftJoin("latest_request", "latest_request.question_id", "questions.id")
+    .leftJoin("question_events as request", "request.id", "latest_request.event_id")
+    .leftJoin("users", "users.id", "request.actor_id")
+    .select([
+      "questions.id",
+      "questions.reference",
+      "questions.topic",
+      "questions.body",
+      "schools.id as schoolId",
+      "schools.slug as schoolSlug",
+      "schools.name as schoolName",
+      "request.created_at as submittedAt",
+      "request.actor_id as submittedById",
+      "users.name as submittedByName",
     ])
-    .where("state", "=", "facilities_check")
-    .orderBy("submittedAt", "asc")
+    .where("questions.state", "=", "facilities_check")
+    .orderBy("request.created_at", "asc")
     .execute();
   return rows.map((r) => ({
     id: r.id,
