@@ -1,23 +1,15 @@
-import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it } from "vitest";
+import { afterEach, describe, expect, it } from "vitest";
 import { createSmtpTransport, deliverDueMail, enqueueMail, InvalidMailError, type MailTransport } from "@/lib/mail";
 import { startSmtpCatcher, type SmtpCatcher } from "../support/smtp-catcher";
-import { createTestDb, type TestDb } from "../support/test-db";
+import { outboxTestDb } from "../support/outbox-db";
 
 const FROM = "Clearhall Test Desk <desk@example.org>";
 const HOST = "portal.example.org";
 const HOUR = 60 * 60_000;
 
-let t: TestDb;
+const t = outboxTestDb();
 let catcher: SmtpCatcher | undefined;
 
-beforeAll(async () => {
-  t = await createTestDb();
-});
-afterAll(async () => t.cleanup());
-beforeEach(async () => {
-  await t.db.deleteFrom("outbox_attempts").execute();
-  await t.db.deleteFrom("outbox").execute();
-});
 afterEach(async () => {
   await catcher?.stop();
   catcher = undefined;

@@ -1,21 +1,13 @@
 import type { KyselyPlugin } from "kysely";
-import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it } from "vitest";
+import { afterEach, describe, expect, it } from "vitest";
 import { enqueueMail, startMailSender, type MailLog, type MailSender, type MailTransport, type OutgoingMail } from "@/lib/mail";
-import { createTestDb, type TestDb } from "../support/test-db";
+import { outboxTestDb } from "../support/outbox-db";
 
 const FROM = "Clearhall Test Desk <desk@example.org>";
 
-let t: TestDb;
+const t = outboxTestDb();
 let sender: MailSender | undefined;
 
-beforeAll(async () => {
-  t = await createTestDb();
-});
-afterAll(async () => t.cleanup());
-beforeEach(async () => {
-  await t.db.deleteFrom("outbox_attempts").execute();
-  await t.db.deleteFrom("outbox").execute();
-});
 afterEach(async () => {
   await sender?.stop();
   sender = undefined;

@@ -1,5 +1,5 @@
 import { sql } from "kysely";
-import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it } from "vitest";
+import { afterEach, describe, expect, it } from "vitest";
 import { openDatabase } from "@/db/connection";
 import {
   createSmtpTransport,
@@ -15,24 +15,16 @@ import { DEFAULT_STALE_CLAIM_MS } from "@/lib/mail/sender";
 import { submitQuestion } from "@/lib/questions/submit";
 import { runReliabilityChild } from "../support/child-process";
 import { startSmtpCatcher, type SmtpCatcher } from "../support/smtp-catcher";
-import { createTestDb, type TestDb } from "../support/test-db";
+import { outboxTestDb } from "../support/outbox-db";
 
 const FROM = "Wrenmoor Valley Schools <reopening@example.org>";
 const HOST = "reopening.example.org";
 const MINUTE = 60_000;
 
-let t: TestDb;
+const t = outboxTestDb();
 const catchers: SmtpCatcher[] = [];
 let sender: MailSender | undefined;
 
-beforeAll(async () => {
-  t = await createTestDb();
-});
-afterAll(async () => t.cleanup());
-beforeEach(async () => {
-  await t.db.deleteFrom("outbox_attempts").execute();
-  await t.db.deleteFrom("outbox").execute();
-});
 afterEach(async () => {
   await sender?.stop();
   sender = undefined;
