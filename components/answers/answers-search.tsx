@@ -138,53 +138,22 @@ export function AnswersSearch({ initialQuery, initialResult, initialLimit, pageS
           className={CONTROL}
         />
         <div className="mt-4 grid gap-4 sm:grid-cols-2">
-          <div>
-            <label htmlFor="answers-school" className="block font-bold">
-              School
-            </label>
-            <p id="answers-school-hint" className="text-sm text-ink-soft">
-              A school’s list also has the answers for every school.
-            </p>
-            <select
-              id="answers-school"
-              name="school"
-              value={query.school}
-              onChange={(e) => update({ school: e.target.value })}
-              aria-describedby="answers-school-hint"
-              className={CONTROL}
-            >
-              <option value="">Any school</option>
-              {schools.map(([slug, name]) => (
-                <option key={slug} value={slug}>
-                  {name}
-                </option>
-              ))}
-              <option value={DISTRICT}>Only answers for every school</option>
-            </select>
-          </div>
-          <div>
-            <label htmlFor="answers-topic" className="block font-bold">
-              Topic
-            </label>
-            <p id="answers-topic-hint" className="text-sm text-ink-soft">
-              What the question is about.
-            </p>
-            <select
-              id="answers-topic"
-              name="topic"
-              value={query.topic}
-              onChange={(e) => update({ topic: e.target.value })}
-              aria-describedby="answers-topic-hint"
-              className={CONTROL}
-            >
-              <option value="">Any topic</option>
-              {topics.map(([code, label]) => (
-                <option key={code} value={code}>
-                  {label}
-                </option>
-              ))}
-            </select>
-          </div>
+          <FilterSelect
+            name="school"
+            label="School"
+            hint="A school’s list also has the answers for every school."
+            value={query.school}
+            onChange={(school) => update({ school })}
+            options={[["", "Any school"], ...schools, [DISTRICT, "Only answers for every school"]]}
+          />
+          <FilterSelect
+            name="topic"
+            label="Topic"
+            hint="What the question is about."
+            value={query.topic}
+            onChange={(topic) => update({ topic })}
+            options={[["", "Any topic"], ...topics]}
+          />
         </div>
         <div className="mt-4 flex flex-wrap items-center gap-x-5 gap-y-2">
           <button type="submit" className={buttonClasses("primary")}>
@@ -253,6 +222,37 @@ export function AnswersSearch({ initialQuery, initialResult, initialLimit, pageS
           </section>
         ) : null}
       </div>
+    </div>
+  );
+}
+
+interface FilterSelectProps {
+  name: "school" | "topic";
+  label: string;
+  hint: string;
+  value: string;
+  onChange: (value: string) => void;
+  options: [value: string, label: string][];
+}
+
+/** One labelled filter with its hint; a plain select, so it works in the GET form without JavaScript. */
+function FilterSelect({ name, label, hint, value, onChange, options }: FilterSelectProps) {
+  const id = `answers-${name}`;
+  return (
+    <div>
+      <label htmlFor={id} className="block font-bold">
+        {label}
+      </label>
+      <p id={`${id}-hint`} className="text-sm text-ink-soft">
+        {hint}
+      </p>
+      <select id={id} name={name} value={value} onChange={(e) => onChange(e.target.value)} aria-describedby={`${id}-hint`} className={CONTROL}>
+        {options.map(([optionValue, optionLabel]) => (
+          <option key={optionValue || "any"} value={optionValue}>
+            {optionLabel}
+          </option>
+        ))}
+      </select>
     </div>
   );
 }

@@ -1,12 +1,13 @@
 "use client";
 
 import { zodResolver } from "@hookform/resolvers/zod";
-import { useEffect, useId, useRef, useState } from "react";
+import { useId, useState } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import type { QuestionDetail } from "@/lib/questions/desk-types";
 import { declineSchema } from "@/lib/validation/desk";
 import { deskApi } from "./api";
+import { ConfirmBox } from "./confirm-box";
 import { useQuestionMutation } from "./use-question";
 
 type DeclineValues = z.output<typeof declineSchema>;
@@ -15,7 +16,6 @@ type DeclineValues = z.output<typeof declineSchema>;
 export function DeclinePanel({ question, onMoved }: { question: QuestionDetail; onMoved: () => void }) {
   const id = useId();
   const [confirming, setConfirming] = useState<DeclineValues | null>(null);
-  const confirmRef = useRef<HTMLDivElement>(null);
   const {
     register,
     handleSubmit,
@@ -31,10 +31,6 @@ export function DeclinePanel({ question, onMoved }: { question: QuestionDetail; 
     },
     onDone: onMoved,
   });
-
-  useEffect(() => {
-    if (confirming) confirmRef.current?.focus();
-  }, [confirming]);
 
   const describedBy = [`${id}-hint`, errors.reason ? `${id}-error` : null].filter(Boolean).join(" ");
   return (
@@ -75,41 +71,22 @@ export function DeclinePanel({ question, onMoved }: { question: QuestionDetail; 
         )}
       </form>
       {confirming ? (
-        <div
-          ref={confirmRef}
-          tabIndex={-1}
-          role="group"
-          aria-labelledby={`${id}-confirm-title`}
-          className="mt-3 rounded-plate border-2 border-ember bg-ember-soft p-3 focus:outline-none focus-visible:outline-3"
+        <ConfirmBox
+          tone="danger"
+          title={`Decline ${question.reference}?`}
+          confirmLabel="Yes, decline and e-mail the asker"
+          pendingLabel="Declining…"
+          pending={decline.isPending}
+          onConfirm={() => decline.mutate(confirming)}
+          onCancel={() => {
+            setConfirming(null);
+            setFocus("reason");
+          }}
         >
-          <h3 id={`${id}-confirm-title`} className="text-base text-ember-deep">
-            Decline {question.reference}?
-          </h3>
           <p className="mt-1 text-sm">
             {question.askerEmail} is e-mailed now, and the question is closed. This cannot be undone.
           </p>
-          <div className="mt-2 flex flex-wrap gap-3">
-            <button
-              type="button"
-              disabled={decline.isPending}
-              onClick={() => decline.mutate(confirming)}
-              className="min-h-11 rounded-plate border-2 border-ember bg-ember px-4 font-bold text-paper hover:bg-ember-deep disabled:opacity-60"
-            >
-              {decline.isPending ? "Declining…" : "Yes, decline and e-mail the asker"}
-            </button>
-            <button
-              type="button"
-              disabled={decline.isPending}
-              onClick={() => {
-                setConfirming(null);
-                setFocus("reason");
-              }}
-              className="min-h-11 rounded-plate border-2 border-harbour bg-paper px-4 font-bold text-harbour-deep hover:bg-harbour-soft"
-            >
-              Cancel
-            </button>
-          </div>
-        </div>
+        </ConfirmBox>
       ) : null}
     </section>
   );

@@ -1,10 +1,11 @@
 "use client";
 
 import Link from "next/link";
-import { useEffect, useId, useRef, useState, type FormEvent } from "react";
+import { useId, useState, type FormEvent } from "react";
 import type { QuestionDetail, RelatedQuestion } from "@/lib/questions/desk-types";
 import { STATE_LABELS } from "@/lib/questions/labels";
 import { deskApi } from "./api";
+import { ConfirmBox } from "./confirm-box";
 import { useQuestionMutation } from "./use-question";
 
 interface Target {
@@ -23,7 +24,6 @@ export function MergePanel({ question, onMoved }: { question: QuestionDetail; on
   const [reference, setReference] = useState("");
   const [lookupError, setLookupError] = useState("");
   const [looking, setLooking] = useState(false);
-  const confirmRef = useRef<HTMLDivElement>(null);
   const merge = useQuestionMutation(question.id, (t: Target) => deskApi.merge(question.id, t.id), {
     success: (_q, t) => `${question.reference} is joined to ${t.reference}. The reply to ${t.reference} goes to this asker too.`,
     alsoChanges: (t) => [t.id],
@@ -32,10 +32,6 @@ export function MergePanel({ question, onMoved }: { question: QuestionDetail; on
       onMoved();
     },
   });
-
-  useEffect(() => {
-    if (target) confirmRef.current?.focus();
-  }, [target]);
 
   const candidates = question.similarOpen.filter((q) => q.id !== question.id);
 
@@ -113,37 +109,17 @@ export function MergePanel({ question, onMoved }: { question: QuestionDetail; on
         ) : null}
       </form>
       {target ? (
-        <div
-          ref={confirmRef}
-          tabIndex={-1}
-          role="group"
-          aria-labelledby={`${id}-confirm-title`}
-          className="mt-3 rounded-plate border-2 border-harbour bg-harbour-soft p-3 focus:outline-none focus-visible:outline-3"
+        <ConfirmBox
+          title={`Join ${question.reference} to ${target.reference}?`}
+          confirmLabel={`Yes, join to ${target.reference}`}
+          pendingLabel="Joining…"
+          pending={merge.isPending}
+          onConfirm={() => merge.mutate(target)}
+          onCancel={() => setTarget(null)}
         >
-          <h3 id={`${id}-confirm-title`} className="text-base">
-            Join {question.reference} to {target.reference}?
-          </h3>
           <p className="mt-1 text-sm">“{target.excerpt}”</p>
           <p className="mt-1 text-sm">The reply written on {target.reference} will go to this asker as well. This cannot be undone.</p>
-          <div className="mt-2 flex flex-wrap gap-3">
-            <button
-              type="button"
-              disabled={merge.isPending}
-              onClick={() => merge.mutate(target)}
-              className="min-h-11 rounded-plate border-2 border-harbour bg-harbour px-4 font-bold text-paper hover:bg-harbour-deep disabled:opacity-60"
-            >
-              {merge.isPending ? "Joining…" : `Yes, join to ${target.reference}`}
-            </button>
-            <button
-              type="button"
-              disabled={merge.isPending}
-              onClick={() => setTarget(null)}
-              className="min-h-11 rounded-plate border-2 border-harbour bg-paper px-4 font-bold text-harbour-deep hover:bg-harbour-soft"
-            >
-              Cancel
-            </button>
-          </div>
-        </div>
+        </ConfirmBox>
       ) : null}
     </section>
   );
