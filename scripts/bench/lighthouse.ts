@@ -65,7 +65,7 @@ function startChromium(): Promise<Browser> {
       });
       process.kill(-child.pid, "SIGTERM");
     });
-  process.on("exit", () => {
+  const killOnExit = () => {
     if (child.pid !== undefined && child.exitCode === null) {
       try {
         process.kill(-child.pid, "SIGKILL");
@@ -73,7 +73,9 @@ function startChromium(): Promise<Browser> {
         // already gone
       }
     }
-  });
+  };
+  process.on("exit", killOnExit);
+  child.once("exit", () => process.off("exit", killOnExit));
   return new Promise((resolve, reject) => {
     let stderr = "";
     const timer = setTimeout(() => {
