@@ -7,6 +7,8 @@
 //    machine barely move: its ratio is what the requests-per-second ratio tends to on a quiet host.
 //    Then two rounds each without compression: `next start` gzips every response as it goes, the
 //    one cost that grows with the page (the school page's HTML is about twice the floor's).
+//    Then the part of the gap that is the framework's own work per byte (gzip, ETag hash), timed on
+//    both pages' HTML, and the share the school page could reach if that were the only difference.
 //    Target: the school page serves at least 80% of the floor's requests per second.
 // 2. POST /api/questions: 500 valid questions over 10 connections (stopped after 60 s whatever
 //    happens), each from its own address (X-Forwarded-For, the server trusts one proxy) and its own
@@ -17,7 +19,8 @@ import { readFileSync } from "node:fs";
 import { loadavg } from "node:os";
 import SQLite from "better-sqlite3";
 import { FLOOR_PATH, withAppServer } from "./lib/app-server";
-import { BROWSER_ACCEPT_ENCODING } from "./lib/http";
+import { BROWSER_ACCEPT_ENCODING, fmtKb, getRaw } from "./lib/http";
+import { perByteWork, type PerByteWork } from "./lib/per-byte-work";
 import { runLoad, type LoadResult } from "./lib/load";
 import { median } from "./lib/stats";
 import { printTable } from "./lib/table";
@@ -150,10 +153,37 @@ async function pages(base: string, pid: number, encoding: string | null, rounds:
   console.log(
     `school page: ${(share * 100).toFixed(0)}% of the floor's requests per second ${mark(share)}; by the server's CPU time per request ${(cpuShare * 100).toFixed(0)}% ${mark(cpuShare)} (target ≥ ${SCHOOL_SHARE_TARGET * 100}%; clock tick ${1000 / CLOCK_TICKS} ms)`,
   );
+  await explainGap(base, floor, school, encoding !== null);
   for (const [name, r] of [["floor", floor], ["school page", school]] as const) {
     const non2xx = [...r.statuses].filter(([code]) => !code.startsWith("2")).reduce((n, [, c]) => n + c, 0);
     if (non2xx || r.errors || r.timeouts) console.log(`warning: the ${name} runs had ${non2xx} non-2xx answers, ${r.errors} errors, ${r.timeouts} timeouts`);
   }
+}
+
+/**
+ * How much of the gap is the framework's per-byte work: both pages come from the prerender cache,
+ * so the rest of a request's work is the same for both. If the pages differed in nothing else, the
+ * school page could reach at most floor CPU / (floor CPU + the extra per-byte work).
+ */
+async function explainGap(base: string, floor: Rounds, school: Rounds, gzip: boolean): Promise<void> {
+  // Whether the server hashes pages for an ETag at all (next.config.mjs generateEtags).
+  let etag = false;
+  const work = async (path: string) => {
+    const response = await getRaw(`${base}${path}`, { "accept-encoding": "identity" });
+    etag ||= response.headers.etag !== undefined;
+    return perByteWork(response.body.toString("utf8"));
+  };
+  const floorWork = await work(FLOOR_PATH);
+  const schoolWork = await work(SCHOOL_PATH);
+  const perRequest = (w: PerByteWork) => (etag ? w.etagMs : 0) + (gzip ? w.gzipMs : 0);
+  const done = (ms: number, isDone: boolean) => (isDone ? ms.toFixed(3) : `not done (${ms.toFixed(3)})`);
+  const row = (label: string, w: PerByteWork) => [label, fmtKb(w.htmlBytes), fmtKb(w.gzipBytes), done(w.gzipMs, gzip), done(w.etagMs, etag), perRequest(w).toFixed(3)];
+  printTable(["page", "HTML", "gzipped", "gzip ms", "ETag ms", "per-byte work ms/req"], [row("empty static page (floor)", floorWork), row("school page", schoolWork)]);
+  const extra = perRequest(schoolWork) - perRequest(floorWork);
+  const bound = floor.cpuMsPerRequest / (floor.cpuMsPerRequest + extra);
+  console.log(
+    `per-byte work: the school page's bigger HTML alone costs ${extra.toFixed(2)} ms more per request (${[gzip ? "gzip at zlib's default level" : "", etag ? "Next's ETag hash" : ""].filter(Boolean).join(" and ") || "none of it is done here"}, timed in this process), of the ${(school.cpuMsPerRequest - floor.cpuMsPerRequest).toFixed(2)} ms the server spent more; with nothing else different it could reach at most ${(bound * 100).toFixed(0)}% of the floor`,
+  );
 }
 
 function count(sqlite: SQLite.Database, sql: string, ...params: unknown[]): number {

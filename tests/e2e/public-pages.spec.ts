@@ -32,6 +32,22 @@ for (const path of ["/schools/no-such-school", "/schools/eastmere/roof", "/distr
   });
 }
 
+test("school pages come from the prerender cache, cacheable by a proxy, without a per-request ETag hash", async ({ request }) => {
+  // next.config.mjs turns generateEtags off: hashing the whole page on every request cost the
+  // school page about a sixth of its throughput (npm run bench -- throughput).
+  for (const path of ["/", "/schools/tamsin-creek", "/schools/eastmere/air"]) {
+    const response = await request.get(path);
+    expect(response.status(), path).toBe(200);
+    expect(response.headers()["etag"], path).toBeUndefined();
+    expect(response.headers()["cache-control"], path).toMatch(/s-maxage=\d+/);
+  }
+  // The answers API still answers conditional requests with its own validator.
+  const answers = await request.get("/api/answers?q=filters");
+  const etag = answers.headers()["etag"];
+  expect(etag).toBeTruthy();
+  expect((await request.get("/api/answers?q=filters", { headers: { "if-none-match": etag! } })).status()).toBe(304);
+});
+
 test("chemical and air pages carry the cautions and send families to the health department", async ({ page }) => {
   await page.goto("/district/cleaning-and-disinfection");
   await expect(page.getByRole("complementary", { name: /^Caution/ }).first()).toBeVisible();
