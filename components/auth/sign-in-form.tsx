@@ -6,6 +6,7 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { TextField } from "@/components/ui/field";
 import { FormProblems, problemsOf } from "@/components/ui/form-problems";
+import { SubmitButton } from "@/components/ui/submit-button";
 import { TOO_MANY_ATTEMPTS } from "@/lib/auth/throttle";
 import { signInSchema, type SignInInput } from "@/lib/validation/sign-in";
 
@@ -44,13 +45,9 @@ export function SignInForm({ callbackUrl }: { callbackUrl: string }) {
       </div>
       <TextField id="email" label="E-mail" type="email" autoComplete="username" error={errors.email?.message} {...register("email")} />
       <TextField id="password" label="Password" type="password" autoComplete="current-password" error={errors.password?.message} {...register("password")} />
-      <button
-        type="submit"
-        disabled={isSubmitting}
-        className="min-h-11 w-full rounded-plate border-2 border-harbour bg-harbour px-4 font-bold text-paper hover:bg-harbour-deep disabled:opacity-60"
-      >
-        {isSubmitting ? "Signing in…" : "Sign in"}
-      </button>
+      <SubmitButton busy={isSubmitting} busyLabel="Signing in…" className="w-full">
+        Sign in
+      </SubmitButton>
     </form>
   );
 }

@@ -6,6 +6,7 @@ import { useState } from "react";
 import { useForm, useWatch, type Resolver } from "react-hook-form";
 import { SelectField, TextField } from "@/components/ui/field";
 import { FormProblems, problemsOf } from "@/components/ui/form-problems";
+import { SubmitButton } from "@/components/ui/submit-button";
 import { ROOM_USES, type RoomUse } from "@/lib/air/ventilation";
 import { cfmToLitresPerSecond, feetToMetres, litresPerSecondToCfm, metresToFeet } from "@/lib/air/units";
 import { ROOM_USE_LABELS } from "@/lib/rooms/labels";
@@ -215,13 +216,9 @@ export function RoomForm({ room, schools = [] }: RoomFormProps) {
           Windows open
         </label>
       </div>
-      <button
-        type="submit"
-        disabled={isSubmitting}
-        className="min-h-11 rounded-plate border-2 border-harbour bg-harbour px-4 font-bold text-paper hover:bg-harbour-deep disabled:opacity-60"
-      >
-        {isSubmitting ? "Saving…" : room ? "Save room" : "Add room"}
-      </button>
+      <SubmitButton busy={isSubmitting} busyLabel="Saving…">
+        {room ? "Save room" : "Add room"}
+      </SubmitButton>
       <p role="status" aria-live="polite" className={status ? `mt-3 font-bold ${status.ok ? "text-leaf" : "text-ember-deep"}` : "sr-only"}>
         {status?.message}
       </p>

@@ -5,6 +5,7 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { addHolidaysAction } from "@/app/(staff)/staff/settings/actions";
 import { TextField } from "@/components/ui/field";
+import { SubmitButton } from "@/components/ui/submit-button";
 import { HOLIDAY_NAME_MAX_LENGTH, holidayAddSchema, type HolidayAdd, type HolidayAddInput } from "@/lib/validation/calendar-settings";
 import { ActionStatus } from "./action-status";
 
@@ -65,13 +66,9 @@ export function HolidayAddForm() {
         error={errors.name?.message}
         {...register("name")}
       />
-      <button
-        type="submit"
-        disabled={isSubmitting}
-        className="min-h-11 rounded-plate border-2 border-harbour bg-harbour px-4 font-bold text-paper hover:bg-harbour-deep disabled:opacity-60"
-      >
-        {isSubmitting ? "Adding…" : "Add to the calendar"}
-      </button>
+      <SubmitButton busy={isSubmitting} busyLabel="Adding…">
+        Add to the calendar
+      </SubmitButton>
       <ActionStatus status={status} />
     </form>
   );

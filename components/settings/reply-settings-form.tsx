@@ -5,6 +5,7 @@ import { useState } from "react";
 import { useForm, useWatch } from "react-hook-form";
 import { saveReplySettingsAction } from "@/app/(staff)/staff/settings/actions";
 import { TextField } from "@/components/ui/field";
+import { SubmitButton } from "@/components/ui/submit-button";
 import { isoDateInTimeZone } from "@/lib/school-days/calendar";
 import { formatIsoDateLong } from "@/lib/school-days/format";
 import type { DistrictHoliday } from "@/lib/school-days/holidays";
@@ -87,13 +88,9 @@ export function ReplySettingsForm({ replyTargetSchoolDays, timeZone, holidays, n
             <option key={z} value={z} />
           ))}
         </datalist>
-        <button
-          type="submit"
-          disabled={isSubmitting}
-          className="min-h-11 rounded-plate border-2 border-harbour bg-harbour px-4 font-bold text-paper hover:bg-harbour-deep disabled:opacity-60"
-        >
-          {isSubmitting ? "Saving…" : "Save reply target"}
-        </button>
+        <SubmitButton busy={isSubmitting} busyLabel="Saving…">
+          Save reply target
+        </SubmitButton>
         <ActionStatus status={status} />
       </form>
 

@@ -12,6 +12,7 @@ import {
 } from "@/app/(staff)/staff/settings/actions";
 import { Button, buttonClasses } from "@/components/ui/button";
 import { TextField } from "@/components/ui/field";
+import { SubmitButton } from "@/components/ui/submit-button";
 import type { SynonymGroup } from "@/lib/settings/synonyms";
 import { synonymGroupAddSchema, type SynonymGroupAddInput } from "@/lib/validation/synonyms";
 import { ActionStatus } from "./action-status";
@@ -163,13 +164,9 @@ function SynonymGroupAdd({ onResult }: { onResult: (status: Status) => void }) {
         error={errors.words?.message}
         {...register("words")}
       />
-      <button
-        type="submit"
-        disabled={isSubmitting}
-        className="min-h-11 rounded-plate border-2 border-harbour bg-harbour px-4 font-bold text-paper hover:bg-harbour-deep disabled:opacity-60"
-      >
-        {isSubmitting ? "Adding…" : "Add the group"}
-      </button>
+      <SubmitButton busy={isSubmitting} busyLabel="Adding…">
+        Add the group
+      </SubmitButton>
     </form>
   );
 }
@@ -203,13 +200,9 @@ function SynonymGroupEdit({ group, onDone }: { group: SynonymGroup; onDone: (res
         {...register("words")}
       />
       <div className="flex flex-wrap gap-2">
-        <button
-          type="submit"
-          disabled={isSubmitting}
-          className="min-h-11 rounded-plate border-2 border-harbour bg-harbour px-4 font-bold text-paper hover:bg-harbour-deep disabled:opacity-60"
-        >
-          {isSubmitting ? "Saving…" : "Save the group"}
-        </button>
+        <SubmitButton busy={isSubmitting} busyLabel="Saving…">
+          Save the group
+        </SubmitButton>
         <Button variant="secondary" onClick={() => onDone(null)}>
           Cancel
         </Button>

@@ -6,6 +6,7 @@ import { useForm } from "react-hook-form";
 import { createAccountAction } from "@/app/(staff)/staff/users/actions";
 import { SelectField, TextField } from "@/components/ui/field";
 import { FormProblems, problemsOf } from "@/components/ui/form-problems";
+import { SubmitButton } from "@/components/ui/submit-button";
 import { ROLES } from "@/db/types";
 import { ROLE_LABELS } from "@/lib/auth/roles";
 import { newStaffAccountSchema, type NewStaffAccount, type NewStaffAccountInput } from "@/lib/validation/staff-account";
@@ -60,13 +61,9 @@ export function NewAccountForm() {
         error={errors.password?.message}
         {...register("password")}
       />
-      <button
-        type="submit"
-        disabled={isSubmitting}
-        className="min-h-11 rounded-plate border-2 border-harbour bg-harbour px-4 font-bold text-paper hover:bg-harbour-deep disabled:opacity-60"
-      >
-        {isSubmitting ? "Adding…" : "Add staff member"}
-      </button>
+      <SubmitButton busy={isSubmitting} busyLabel="Adding…">
+        Add staff member
+      </SubmitButton>
       <p role="status" aria-live="polite" className={status ? `mt-3 font-bold ${status.ok ? "text-leaf" : "text-ember-deep"}` : "sr-only"}>
         {status?.message}
       </p>

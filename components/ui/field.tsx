@@ -11,6 +11,16 @@ interface FieldShellProps {
   children: ReactNode;
 }
 
+/** The message under a control; its id is the one describedBy gives the control. The "!" marks it without colour. */
+function FieldError({ id, error }: { id: string; error?: string }) {
+  return error ? (
+    <p id={`${id}-error`} className="mt-1 font-bold text-ember-deep">
+      <span aria-hidden="true">! </span>
+      {error}
+    </p>
+  ) : null;
+}
+
 /** Label, hint and error wired to the control with ids, so screen readers read all three. */
 export function FieldShell({ id, label, hint, error, children }: FieldShellProps) {
   return (
@@ -24,12 +34,7 @@ export function FieldShell({ id, label, hint, error, children }: FieldShellProps
         </p>
       ) : null}
       {children}
-      {error ? (
-        <p id={`${id}-error`} className="mt-1 font-bold text-ember-deep">
-          <span aria-hidden="true">! </span>
-          {error}
-        </p>
-      ) : null}
+      <FieldError id={id} error={error} />
     </div>
   );
 }
@@ -120,18 +125,13 @@ export function CheckboxField({ id, label, error, ...input }: CheckboxFieldProps
           id={id}
           type="checkbox"
           aria-invalid={error ? true : undefined}
-          aria-describedby={error ? `${id}-error` : undefined}
+          aria-describedby={describedBy(id, undefined, error)}
           className="mt-1 size-6 shrink-0 accent-harbour"
           {...input}
         />
         <label htmlFor={id}>{label}</label>
       </div>
-      {error ? (
-        <p id={`${id}-error`} className="mt-1 font-bold text-ember-deep">
-          <span aria-hidden="true">! </span>
-          {error}
-        </p>
-      ) : null}
+      <FieldError id={id} error={error} />
     </div>
   );
 }
