@@ -5,6 +5,7 @@ import Link from "next/link";
 import { TOPIC_LABELS } from "@/lib/questions/labels";
 import { deskApi, deskKeys } from "./api";
 import { formatDateTime, plural } from "./format";
+import { LoadError } from "./load-error";
 
 /** Technical answers waiting for facilities, oldest first as the server sends them. */
 export function CheckList({ timeZone, refreshMs = 30_000 }: { timeZone: string; refreshMs?: number }) {
@@ -22,14 +23,7 @@ export function CheckList({ timeZone, refreshMs = 30_000 }: { timeZone: string; 
       <p role="status" aria-live="polite" className="font-bold" data-testid="check-summary">
         {summary}
       </p>
-      {checks.isError ? (
-        <div role="alert" className="mt-2 rounded-plate border-l-8 border-ember bg-ember-soft p-3">
-          <p className="font-bold">{checks.error.message}</p>
-          <button type="button" className="mt-1 min-h-11 font-bold text-harbour underline underline-offset-4" onClick={() => checks.refetch()}>
-            Try again
-          </button>
-        </div>
-      ) : null}
+      {checks.isError ? <LoadError message={checks.error.message} onRetry={() => checks.refetch()} /> : null}
       {items.length > 0 ? (
         <div className="mt-3 overflow-x-auto rounded-plate border-2 border-paper-line bg-white" role="region" aria-labelledby="check-caption" tabIndex={0}>
           <table className="w-full min-w-[48rem] border-collapse text-left text-sm" data-testid="check-table">

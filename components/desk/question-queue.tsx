@@ -10,6 +10,7 @@ import type { QueueItem } from "@/lib/questions/desk-types";
 import type { QueueQuery, QueueSort } from "@/lib/validation/desk";
 import { deskApi, deskKeys } from "./api";
 import { formatDateTime, plural, schoolDaysLeftLabel, urgencyOf } from "./format";
+import { LoadError } from "./load-error";
 import { parseQueueParams, queueSearch, QUEUE_DEFAULTS } from "./queue-params";
 import { StateBadge } from "./state-badge";
 
@@ -304,14 +305,7 @@ export function QuestionQueue({ schools, timeZone, refreshMs = 30_000 }: Questio
       <p role="status" aria-live="polite" className="mt-1 font-bold" data-testid="queue-summary">
         {summary}
       </p>
-      {queue.isError ? (
-        <div role="alert" className="mt-2 rounded-plate border-l-8 border-ember bg-ember-soft p-3">
-          <p className="font-bold">{queue.error.message}</p>
-          <button type="button" className="mt-1 font-bold text-harbour underline underline-offset-4" onClick={() => queue.refetch()}>
-            Try again
-          </button>
-        </div>
-      ) : null}
+      {queue.isError ? <LoadError message={queue.error.message} onRetry={() => queue.refetch()} /> : null}
 
       {data && data.items.length > 0 ? (
         <div className="mt-3 overflow-x-auto rounded-plate border-2 border-paper-line bg-white" role="region" aria-labelledby="queue-caption" tabIndex={0} aria-busy={queue.isPlaceholderData || undefined}>

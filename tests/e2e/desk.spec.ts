@@ -551,3 +551,23 @@ test("each role reaches only its own desk pages", async ({ browser }) => {
   await comms.context.close();
   await facilities.context.close();
 });
+
+test("a desk list that cannot be fetched says why, and Try again loads it", async ({ browser }) => {
+  for (const [role, path, api, summary] of [
+    ["communications", "/staff/desk", "/api/staff/questions", "queue-summary"],
+    ["facilities", "/staff/check", "/api/staff/checks", "check-summary"],
+  ] as const) {
+    const { context, page } = await staffPage(browser, role);
+    // The server is down until the test lets it come back (the client retries a 5xx twice on its own).
+    let down = true;
+    await page.route((url) => url.pathname === api, (route) => (down ? route.fulfill({ status: 503, contentType: "application/json", body: "{}" }) : route.fallback()));
+    await page.goto(path);
+    const alert = page.getByRole("alert").filter({ hasText: "The server could not do this just now" });
+    await expect(alert, path).toBeVisible({ timeout: 20_000 });
+    down = false;
+    await alert.getByRole("button", { name: "Try again" }).click();
+    await expect(alert, path).toHaveCount(0);
+    await expect(page.getByTestId(summary), path).not.toHaveText(/could not be loaded|Loading/);
+    await context.close();
+  }
+});
