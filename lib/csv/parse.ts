@@ -169,19 +169,89 @@ export function parseCsv(text: string, options?: CsvParserOptions): CsvRecord[] 
   return [...parser.push(text), ...parser.end()];
 }
 
+/** Counts line breaks as the parser does (CRLF, LF or a lone CR), across pieces of text. */
+function lineCounter() {
+  let lines = 1;
+  let crPending = false;
+  return {
+    get line() {
+      return lines;
+    },
+    add(text: string): void {
+      for (let i = 0; i < text.length; i += 1) {
+        const c = text.charCodeAt(i);
+        if (c === LF) {
+          if (!crPending) lines += 1;
+          crPending = false;
+        } else {
+          crPending = c === CR;
+          if (crPending) lines += 1;
+        }
+      }
+    },
+  };
+}
+
+/**
+ * The text of a chunk up to its first byte that cannot be UTF-8, given the bytes the decoder
+ * still held from the chunk before: the longest prefix a fresh decoder takes without error
+ * (found by halving; only ever run on a file that is being refused).
+ */
+function textBeforeBadByte(carry: Uint8Array, chunk: Uint8Array): string {
+  const bytes = new Uint8Array(carry.length + chunk.length);
+  bytes.set(carry);
+  bytes.set(chunk, carry.length);
+  const decodes = (n: number) => {
+    try {
+      new TextDecoder("utf-8", { fatal: true, ignoreBOM: true }).decode(bytes.subarray(0, n), { stream: true });
+      return true;
+    } catch {
+      return false;
+    }
+  };
+  let good = 0;
+  let bad = bytes.length;
+  while (bad - good > 1) {
+    const mid = (good + bad) >> 1;
+    if (decodes(mid)) good = mid;
+    else bad = mid;
+  }
+  return new TextDecoder("utf-8", { ignoreBOM: true }).decode(bytes.subarray(0, good), { stream: true });
+}
+
+/** The bytes at the end of a chunk that may start a character the next chunk completes. */
+function unfinishedTail(chunk: Uint8Array): Uint8Array {
+  for (let back = 1; back <= Math.min(3, chunk.length); back += 1) {
+    const byte = chunk[chunk.length - back]!;
+    if ((byte & 0xc0) !== 0x80) {
+      const needs = byte >= 0xf0 ? 4 : byte >= 0xe0 ? 3 : byte >= 0xc0 ? 2 : 1;
+      return needs > back ? chunk.slice(chunk.length - back) : new Uint8Array(0);
+    }
+  }
+  return chunk.slice(chunk.length - Math.min(3, chunk.length));
+}
+
 /**
  * Records from a stream of bytes, decoded as UTF-8 as they arrive, handed over a
  * chunk's worth at a time (an await per record would cost more than the parsing).
+ * Bytes that are not UTF-8 are refused with the line they stand on.
  */
 export async function* csvRecordBatches(chunks: AsyncIterable<Uint8Array>, options?: CsvParserOptions): AsyncGenerator<CsvRecord[]> {
   const decoder = new TextDecoder("utf-8", { fatal: true, ignoreBOM: true });
   const parser = createCsvParser(options);
+  const lines = lineCounter();
+  let carry: Uint8Array = new Uint8Array(0);
   const decode = (chunk?: Uint8Array) => {
+    let text: string;
     try {
-      return chunk ? decoder.decode(chunk, { stream: true }) : decoder.decode();
+      text = chunk ? decoder.decode(chunk, { stream: true }) : decoder.decode();
     } catch {
-      throw new CsvSyntaxError(0, "the file is not UTF-8 text; save it as CSV UTF-8");
+      lines.add(textBeforeBadByte(carry, chunk ?? new Uint8Array(0)));
+      throw new CsvSyntaxError(lines.line, "this line holds bytes that are not UTF-8 text; save the file as CSV UTF-8");
     }
+    lines.add(text);
+    if (chunk) carry = unfinishedTail(carry.length && chunk.length < 3 ? concat(carry, chunk) : chunk);
+    return text;
   };
   for await (const chunk of chunks) {
     const records = parser.push(decode(chunk));
@@ -189,4 +259,11 @@ export async function* csvRecordBatches(chunks: AsyncIterable<Uint8Array>, optio
   }
   const last = [...parser.push(decode()), ...parser.end()];
   if (last.length) yield last;
+}
+
+function concat(a: Uint8Array, b: Uint8Array): Uint8Array {
+  const out = new Uint8Array(a.length + b.length);
+  out.set(a);
+  out.set(b, a.length);
+  return out;
 }

@@ -130,6 +130,25 @@ describe("CSV uploads refuse what is not a CSV file, with a message, and change 
       expect(await snapshot()).toEqual(before);
     });
 
+    it(`${route} import: a byte that is not UTF-8 after the first 4 KB is refused with its line, and nothing is stored`, async () => {
+      const before = await snapshot();
+      // 80 good lines (over 4 KB, past the first look at the file), then line 82 with è in Windows-1252.
+      const good = Array.from({ length: 80 }, (_, i) =>
+        route === "rooms"
+          ? `tamsin-creek,Room ${700 + i},classroom_5_8,30,30,9.5,22,420,0,,13,yes`
+          : `tamsin-creek,Room 101,2026-11-30T${String(8 + Math.floor(i / 60)).padStart(2, "0")}:${String(i % 60).padStart(2, "0")}:00-05:00,700`,
+      );
+      const header = route === "rooms" ? ROOMS_HEADER : "school,room,timestamp,co2_ppm";
+      const text = new TextEncoder().encode(`${header}\r\n${good.join("\r\n")}\r\ntamsin-creek,Pi`);
+      expect(text.length).toBeGreaterThan(4096);
+      const bytes = Uint8Array.from([...text, 0xe8, ...new TextEncoder().encode("ce,1\r\n")]);
+      const response = await send()(upload(path, bytes, "late.csv", "text/csv"));
+      expect(response.status).toBe(422);
+      const body = (await response.json()) as { fileErrors: string[] };
+      expect(body.fileErrors).toEqual([expect.stringMatching(/^Line 82: .*not UTF-8.*CSV UTF-8/)]);
+      expect(await snapshot()).toEqual(before);
+    });
+
     it(`${route} import: a text file that is not the expected CSV is refused with the header it needs`, async () => {
       const before = await snapshot();
       const response = await send()(upload(path, '{"rooms": []}\n', "rooms.json", "application/json"));

@@ -106,6 +106,39 @@ describe("CSV reader (RFC 4180)", () => {
       for await (const _ of csvRecordBatches(chunks())) void _;
     }).rejects.toThrow(/not UTF-8/);
   });
+
+  /** The line the reader names for the first byte that is not UTF-8, the bytes cut into pieces of `size`. */
+  async function badLine(bytes: Uint8Array, size: number): Promise<string> {
+    async function* chunks() {
+      for (let i = 0; i < bytes.length; i += size) yield bytes.slice(i, i + size);
+    }
+    try {
+      for await (const _ of csvRecordBatches(chunks())) void _;
+    } catch (error) {
+      return (error as Error).message;
+    }
+    return "no error";
+  }
+  const bytesOf = (...parts: (string | number[])[]) =>
+    Uint8Array.from(parts.flatMap((p) => (typeof p === "string" ? [...new TextEncoder().encode(p)] : p)));
+
+  it("names the line of a byte that is not UTF-8, wherever the chunks are cut", async () => {
+    // Line 3 holds "Salle " then 0xE8 (è in Windows-1252); lines before it use CRLF, LF and é (two bytes).
+    const bytes = bytesOf("room,ppm\r\nSalle é,1200\n", "Salle ", [0xe8], ",900\r\n");
+    for (const size of [1, 2, 3, 5, 7, 4096]) {
+      expect(await badLine(bytes, size), `chunks of ${size}`).toMatch(/^line 3: .*not UTF-8/);
+    }
+  });
+
+  it("counts a CRLF split across chunks once and a lone CR as a line break", async () => {
+    const bytes = bytesOf("a\r\nb\rc\n", [0xff], "\n");
+    for (const size of [1, 2, 3]) expect(await badLine(bytes, size), `chunks of ${size}`).toMatch(/^line 4: /);
+  });
+
+  it("names the last line when the file ends inside a character", async () => {
+    const bytes = bytesOf("room\nSalle ", [0xc3]);
+    for (const size of [1, 4096]) expect(await badLine(bytes, size), `chunks of ${size}`).toMatch(/^line 2: .*not UTF-8/);
+  });
 });
 
 describe("CSV writer", () => {
