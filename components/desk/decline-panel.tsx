@@ -7,7 +7,7 @@ import type { z } from "zod";
 import type { QuestionDetail } from "@/lib/questions/desk-types";
 import { declineSchema } from "@/lib/validation/desk";
 import { deskApi } from "./api";
-import { ConfirmBox } from "./confirm-box";
+import { ConfirmBox } from "@/components/ui/confirm-box";
 import { useQuestionMutation } from "./use-question";
 
 type DeclineValues = z.output<typeof declineSchema>;

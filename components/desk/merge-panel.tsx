@@ -5,7 +5,7 @@ import { useId, useState, type FormEvent } from "react";
 import type { QuestionDetail, RelatedQuestion } from "@/lib/questions/desk-types";
 import { STATE_LABELS } from "@/lib/questions/labels";
 import { deskApi } from "./api";
-import { ConfirmBox } from "./confirm-box";
+import { ConfirmBox } from "@/components/ui/confirm-box";
 import { useQuestionMutation } from "./use-question";
 
 interface Target {

@@ -108,3 +108,34 @@ export async function createRoom(db: DB, schoolId: number, room: RoomRecord, act
     return row;
   });
 }
+
+export interface RemovedRoom {
+  id: number;
+  name: string;
+  school: string;
+  schoolSlug: string;
+  /** CO2 readings and school-day summaries removed with it. */
+  readings: number;
+  days: number;
+}
+
+/**
+ * Removes a room and, with it (the foreign keys cascade), its CO2 readings and day summaries, in
+ * one transaction; null when no room has the id. The counts are what the confirmation warned of.
+ */
+export async function deleteRoom(db: DB, id: number): Promise<RemovedRoom | null> {
+  return db.transaction().execute(async (trx) => {
+    const room = await getRoom(trx, id);
+    if (!room) return null;
+    const { readings, days } = await roomDataCounts(trx, id);
+    await trx.deleteFrom("rooms").where("id", "=", id).execute();
+    return { id, name: room.name, school: room.school, schoolSlug: room.schoolSlug, readings, days };
+  });
+}
+
+/** How many CO2 readings and school days a room holds: what removing it would take away. */
+export async function roomDataCounts(db: DB, id: number): Promise<{ readings: number; days: number }> {
+  const count = async (table: "co2_readings" | "co2_daily") =>
+    Number((await db.selectFrom(table).select((eb) => eb.fn.countAll<number>().as("n")).where("room_id", "=", id).executeTakeFirstOrThrow()).n);
+  return { readings: await count("co2_readings"), days: await count("co2_daily") };
+}

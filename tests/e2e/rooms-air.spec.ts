@@ -238,3 +238,38 @@ test("facilities exports the rooms as CSV in US units", async ({ page }) => {
   expect(lines.every((l, i) => i === 0 || l.startsWith("tamsin-creek,"))).toBe(true);
   expect((await page.request.get("/api/staff/rooms/export?school=nowhere")).status()).toBe(404);
 });
+
+test("facilities removes a room after a second step; its readings go with it and the public page no longer lists it", async ({ page }) => {
+  await signInThroughPage(page, DEMO_ACCOUNTS.facilities);
+  const created = await page.request.post("/api/staff/rooms", {
+    data: { school: "tamsin-creek", name: "Room 950", use: "office", units: "us", length: 12, width: 10, ceiling: 9, occupancy: 2, outdoorAir: 60, airCleaners: 0, merv: null, windowsOpen: true },
+  });
+  expect(created.status(), await created.text()).toBe(201);
+  const { room } = (await created.json()) as { room: { id: number } };
+  const log = ["school,room,timestamp,co2_ppm", ...[8, 9, 10, 11, 12, 13].map((h) => `tamsin-creek,Room 950,2026-12-01T${String(h).padStart(2, "0")}:00:00-05:00,700`)].join("\n");
+  const imported = await page.request.post("/api/staff/co2/import", { multipart: { file: { name: "room-950.csv", mimeType: "text/csv", buffer: Buffer.from(log) } } });
+  expect(imported.status(), await imported.text()).toBe(200);
+  await page.goto("/schools/tamsin-creek/air");
+  await expect(page.getByTestId("room-figures-table").locator('tr[data-room="Room 950"]')).toHaveCount(1);
+
+  await page.goto(`/staff/rooms/${room.id}`);
+  const opener = page.getByRole("button", { name: "Remove this room…" });
+  await opener.click();
+  const confirm = page.getByRole("group", { name: "Remove Room 950?" });
+  await expect(confirm).toBeFocused();
+  await expect(confirm).toContainText("its 6 CO2 readings over 1 school day go with it");
+  // Cancel changes nothing and gives the focus back.
+  await confirm.getByRole("button", { name: "Cancel" }).click();
+  await expect(opener).toBeFocused();
+  expect((await page.request.get(`/api/staff/rooms/${room.id}`)).status()).toBe(200);
+
+  await opener.click();
+  await page.getByRole("button", { name: "Remove the room" }).click();
+  await expect(page).toHaveURL(/\/staff\/rooms\?removed=/);
+  await expect(page.getByTestId("room-removed")).toContainText("Removed: Room 950, Tamsin Creek Elementary School");
+  await expect(page.getByTestId("staff-rooms-tamsin-creek").getByRole("link", { name: "Room 950" })).toHaveCount(0);
+  expect((await page.request.get(`/api/staff/rooms/${room.id}`)).status()).toBe(404);
+  expect((await apiRooms(page, "tamsin-creek")).map((r) => r.room)).not.toContain("Room 950");
+  await page.goto("/schools/tamsin-creek/air");
+  await expect(page.getByTestId("room-figures-table").locator('tr[data-room="Room 950"]')).toHaveCount(0);
+});

@@ -41,6 +41,7 @@ const MANIFEST: Record<string, Partial<Record<Method, { roles: Role[]; data?: un
       roles: FACILITIES,
       data: { name: "Room 101", use: "classroom_5_8", units: "us", length: 30, width: 30, ceiling: 9.5, occupancy: 22, outdoorAir: 420, airCleaners: 0, merv: 13, windowsOpen: true },
     },
+    DELETE: { roles: FACILITIES },
   },
   "rooms/import": { POST: { roles: FACILITIES, query: ["", "?dryRun=1"] } },
   "rooms/export": { GET: { roles: FACILITIES } },

@@ -1,6 +1,7 @@
 import Link from "next/link";
 import { formatOneDecimal, formatUpToOne, formatWhole } from "@/components/air/format";
 import { RoomImport } from "@/components/rooms/room-import";
+import { Notice } from "@/components/ui/notice";
 import { db } from "@/db/client";
 import { requireStaffPage } from "@/lib/auth/guard";
 import { STAFF_PAGE_ROLES } from "@/lib/auth/staff-nav";
@@ -13,8 +14,13 @@ import { airSettings } from "@/lib/settings/air";
 
 export const metadata = { title: "Rooms" };
 
-export default async function RoomsPage() {
+/** The room just removed (set by the room page after a removal), said once at the top. */
+const REMOVED_MAX_CHARS = 200;
+
+export default async function RoomsPage({ searchParams }: { searchParams: Promise<{ removed?: string | string[] }> }) {
   await requireStaffPage(STAFF_PAGE_ROLES.rooms, "/staff/rooms");
+  const removedParam = (await searchParams).removed;
+  const removed = typeof removedParam === "string" ? removedParam.slice(0, REMOVED_MAX_CHARS) : null;
   const [schools, rooms, settings] = await Promise.all([listSchools(db()), listRooms(db()), airSettings(db())]);
   const co2 = await latestCo2Days(db(), rooms.map((r) => r.id));
   const spacing = formatUpToOne(settings.seatingSpacingFt);
@@ -37,6 +43,14 @@ export default async function RoomsPage() {
           </a>
         </p>
       </div>
+
+      {removed ? (
+        <div role="status" data-testid="room-removed">
+          <Notice tone="success" title={`Removed: ${removed}`}>
+            The school&apos;s Fresh air page no longer lists it, and the room&apos;s CO2 readings, if it had any, are gone with it.
+          </Notice>
+        </div>
+      ) : null}
 
       <section aria-labelledby="import-heading" className="mt-6 rounded-plate border-2 border-paper-line bg-white p-4">
         <h2 id="import-heading" className="text-xl">

@@ -2,6 +2,7 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { formatDay, formatMinutes, formatOneDecimal, formatUpToOne, formatUpToTwo, formatWhole } from "@/components/air/format";
 import { RoomForm } from "@/components/rooms/room-form";
+import { RoomRemove } from "@/components/rooms/room-remove";
 import { SeatingPlanner } from "@/components/seating/seating-planner";
 import { db } from "@/db/client";
 import { cfmToLitresPerSecond } from "@/lib/air/units";
@@ -12,7 +13,7 @@ import { roomCo2History } from "@/lib/co2/repository";
 import { outdoorAirEstimate } from "@/lib/co2/estimate";
 import { figuresOfRoom, latestCo2Days } from "@/lib/rooms/figures";
 import { ROOM_USE_LABELS } from "@/lib/rooms/labels";
-import { getRoom } from "@/lib/rooms/repository";
+import { getRoom, roomDataCounts } from "@/lib/rooms/repository";
 import { getSchoolBySlug } from "@/lib/schools/repository";
 import { airSettings } from "@/lib/settings/air";
 import { roomIdSchema } from "@/lib/validation/room";
@@ -37,11 +38,12 @@ export default async function RoomPage({ params }: Params) {
   const id = roomIdSchema.safeParse(raw);
   const room = id.success ? await getRoom(db(), id.data) : null;
   if (!room) notFound();
-  const [school, settings, co2, history] = await Promise.all([
+  const [school, settings, co2, history, data] = await Promise.all([
     getSchoolBySlug(db(), room.schoolSlug),
     airSettings(db()),
     latestCo2Days(db(), [room.id]),
     roomCo2History(db(), room.id),
+    roomDataCounts(db(), room.id),
   ]);
   const f = figuresOfRoom(room, settings, co2.get(room.id) ?? null);
   const rate = OUTDOOR_AIR_RATES[room.use];
@@ -192,6 +194,16 @@ export default async function RoomPage({ params }: Params) {
             </p>
           </>
         )}
+      </section>
+
+      <section aria-labelledby="remove" className="mt-8">
+        <h2 id="remove" className="text-xl">
+          Remove the room
+        </h2>
+        <p className="mb-3 max-w-prose text-sm text-ink-soft">
+          For a room that is no longer used for teaching or was added by mistake. A room that only changed is better edited above.
+        </p>
+        <RoomRemove id={room.id} name={room.name} school={room.school} readings={data.readings} days={data.days} />
       </section>
     </>
   );

@@ -4,7 +4,7 @@ import { STAFF_PAGE_ROLES } from "@/lib/auth/staff-nav";
 import { jsonError, validationError } from "@/lib/http/errors";
 import { readJson, staffRoute } from "@/lib/http/staff-route";
 import { revalidateSchoolAir } from "@/lib/rooms/publish";
-import { getRoom, RoomNameTakenError, updateRoom } from "@/lib/rooms/repository";
+import { deleteRoom, getRoom, RoomNameTakenError, updateRoom } from "@/lib/rooms/repository";
 import { roomIdSchema, roomInputSchema } from "@/lib/validation/room";
 
 export const dynamic = "force-dynamic";
@@ -37,4 +37,13 @@ export const PATCH = staffRoute<Context>(STAFF_PAGE_ROLES.rooms, async (request,
     if (error instanceof RoomNameTakenError) return NextResponse.json({ errors: { name: error.message } }, { status: 409 });
     throw error;
   }
+});
+
+/** DELETE the room with its CO2 readings and day summaries; answers what was removed. */
+export const DELETE = staffRoute<Context>(STAFF_PAGE_ROLES.rooms, async (_request, { params }) => {
+  const id = roomIdSchema.safeParse((await params).id);
+  const removed = id.success ? await deleteRoom(db(), id.data) : null;
+  if (!removed) return jsonError(404, "No room has this id.");
+  revalidateSchoolAir(removed.schoolSlug);
+  return NextResponse.json({ removed });
 });

@@ -23,7 +23,7 @@ export interface ConfirmBoxProps {
   pending: boolean;
   onConfirm: () => void;
   onCancel: () => void;
-  /** "danger" for a step that e-mails someone or closes a question for good. */
+  /** "danger" for a step that e-mails someone, closes a question for good or removes data. */
   tone?: keyof typeof TONES;
 }
 
