@@ -29,12 +29,6 @@ const SECURITY_HEADERS = [
 const nextConfig = {
   reactStrictMode: true,
   poweredByHeader: false,
-  // No ETag on pages: Next hashes every page's whole HTML on every request to make one (FNV-1a in
-  // JavaScript), which cost the school page about a sixth of its throughput under load
-  // (`npm run bench -- throughput`), while the only gain is a 304 instead of a ~6 kB gzipped page on
-  // a reload. Pages carry Cache-Control (s-maxage) for a caching proxy, which can add its own
-  // validators. Route handlers that want conditional requests (the answers API) set their own ETag.
-  generateEtags: false,
   // Lets two checkouts' test runs share one machine without overwriting each other's build.
   distDir: process.env.NEXT_DIST_DIR ?? ".next",
   async headers() {
