@@ -5,20 +5,7 @@ import { createTestDb, type TestDb } from "../support/test-db";
 
 // The real DELETE /api/staff/rooms/[id] handler over the seeded demo data, signed in as facilities:
 // who may call it is covered by tests/e2e/staff-api-guard.spec.ts.
-vi.mock("@/lib/auth/guard", () => {
-  class AuthorizationError extends Error {
-    constructor(
-      readonly status: 401 | 403,
-      message: string,
-    ) {
-      super(message);
-    }
-  }
-  return {
-    AuthorizationError,
-    requireRole: async () => ({ id: 2, email: "facilities@example.org", name: "Facilities", role: "facilities" }),
-  };
-});
+vi.mock("@/lib/auth/guard", () => import("../support/guard-as-facilities"));
 const revalidated: string[] = [];
 vi.mock("@/lib/rooms/publish", () => ({ revalidateSchoolAir: (slug: string) => revalidated.push(slug) }));
 

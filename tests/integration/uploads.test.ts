@@ -6,20 +6,7 @@ import { createTestDb, type TestDb } from "../support/test-db";
 
 // The real route handlers, signed in as facilities: the role check itself is covered by the
 // browser tests (tests/e2e/staff-api-guard.spec.ts); here it is the upload checks that answer.
-vi.mock("@/lib/auth/guard", () => {
-  class AuthorizationError extends Error {
-    constructor(
-      readonly status: 401 | 403,
-      message: string,
-    ) {
-      super(message);
-    }
-  }
-  return {
-    AuthorizationError,
-    requireRole: async () => ({ id: 2, email: "facilities@example.org", name: "Facilities", role: "facilities" }),
-  };
-});
+vi.mock("@/lib/auth/guard", () => import("../support/guard-as-facilities"));
 // Revalidating pages needs a running Next.js server.
 vi.mock("@/lib/rooms/publish", () => ({ revalidateSchoolAir: () => undefined }));
 
