@@ -25,10 +25,13 @@ function token(name: string): string {
 
 const CSS = readFileSync(resolve(__dirname, "../../app/globals.css"), "utf8");
 
+/** The declarations of the rule whose selector list holds `selector` (alone or with others). */
 function rule(selector: string): string {
-  const start = CSS.indexOf(`${selector} {`);
-  if (start < 0) throw new Error(`no "${selector}" rule in app/globals.css`);
-  return CSS.slice(start, CSS.indexOf("}", start));
+  const escaped = selector.replace(/[.*+?^${}()|[\]\\]/g, "\\$&");
+  const match = new RegExp(`(^|[\\s,])${escaped}\\s*[,{]`, "m").exec(CSS);
+  if (!match) throw new Error(`no "${selector}" rule in app/globals.css`);
+  const open = CSS.indexOf("{", match.index);
+  return CSS.slice(open, CSS.indexOf("}", open));
 }
 
 describe("lib/contrast follows the WCAG 2.1 definitions", () => {
