@@ -2,6 +2,7 @@
 
 import { useRouter } from "next/navigation";
 import { useRef, useState } from "react";
+import { plural } from "@/components/desk/format";
 import { ConfirmBox } from "@/components/ui/confirm-box";
 
 export interface RoomRemoveProps {
@@ -12,8 +13,6 @@ export interface RoomRemoveProps {
   readings: number;
   days: number;
 }
-
-const plural = (n: number, one: string, many: string) => `${n.toLocaleString("en-US")} ${n === 1 ? one : many}`;
 
 /** Removes a room after a second, explicit step; then back to the rooms list, which says what went. */
 export function RoomRemove({ id, name, school, readings, days }: RoomRemoveProps) {
@@ -45,7 +44,7 @@ export function RoomRemove({ id, name, school, readings, days }: RoomRemoveProps
 
   const takes =
     readings > 0
-      ? `its ${plural(readings, "CO2 reading", "CO2 readings")} over ${plural(days, "school day", "school days")} go with it`
+      ? `its ${plural(readings, "CO2 reading")} over ${plural(days, "school day")} go with it`
       : "it has no CO2 readings";
   return (
     <div data-testid="room-remove">

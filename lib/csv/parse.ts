@@ -28,6 +28,8 @@ export interface CsvParserOptions {
 export interface CsvParser {
   /** Feeds more text; returns the records completed by it. */
   push(text: string): CsvRecord[];
+  /** The 1-based line the next character pushed will be on. */
+  readonly line: number;
   /** Ends the input; returns the last record if the file did not end with a line break. */
   end(): CsvRecord[];
 }
@@ -76,6 +78,9 @@ export function createCsvParser(options: CsvParserOptions = {}): CsvParser {
   }
 
   return {
+    get line() {
+      return line;
+    },
     push(text) {
       if (ended) throw new Error("this CSV parser has ended");
       const out: CsvRecord[] = [];
@@ -169,29 +174,6 @@ export function parseCsv(text: string, options?: CsvParserOptions): CsvRecord[] 
   return [...parser.push(text), ...parser.end()];
 }
 
-/** Counts line breaks as the parser does (CRLF, LF or a lone CR), across pieces of text. */
-function lineCounter() {
-  let lines = 1;
-  let crPending = false;
-  return {
-    get line() {
-      return lines;
-    },
-    add(text: string): void {
-      for (let i = 0; i < text.length; i += 1) {
-        const c = text.charCodeAt(i);
-        if (c === LF) {
-          if (!crPending) lines += 1;
-          crPending = false;
-        } else {
-          crPending = c === CR;
-          if (crPending) lines += 1;
-        }
-      }
-    },
-  };
-}
-
 /**
  * The text of a chunk up to its first byte that cannot be UTF-8, given the bytes the decoder
  * still held from the chunk before: the longest prefix a fresh decoder takes without error
@@ -239,17 +221,16 @@ function unfinishedTail(chunk: Uint8Array): Uint8Array {
 export async function* csvRecordBatches(chunks: AsyncIterable<Uint8Array>, options?: CsvParserOptions): AsyncGenerator<CsvRecord[]> {
   const decoder = new TextDecoder("utf-8", { fatal: true, ignoreBOM: true });
   const parser = createCsvParser(options);
-  const lines = lineCounter();
   let carry: Uint8Array = new Uint8Array(0);
   const decode = (chunk?: Uint8Array) => {
     let text: string;
     try {
       text = chunk ? decoder.decode(chunk, { stream: true }) : decoder.decode();
     } catch {
-      lines.add(textBeforeBadByte(carry, chunk ?? new Uint8Array(0)));
-      throw new CsvSyntaxError(lines.line, "this line holds bytes that are not UTF-8 text; save the file as CSV UTF-8");
+      // The parser counts the lines: hand it the good text before the bad byte, then ask.
+      parser.push(textBeforeBadByte(carry, chunk ?? new Uint8Array(0)));
+      throw new CsvSyntaxError(parser.line, "this line holds bytes that are not UTF-8 text; save the file as CSV UTF-8");
     }
-    lines.add(text);
     if (chunk) carry = unfinishedTail(carry.length && chunk.length < 3 ? concat(carry, chunk) : chunk);
     return text;
   };

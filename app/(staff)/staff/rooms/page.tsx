@@ -14,7 +14,7 @@ import { airSettings } from "@/lib/settings/air";
 
 export const metadata = { title: "Rooms" };
 
-/** The room just removed (set by the room page after a removal), said once at the top. */
+/** `?removed=` names the room the room page has just removed; it is said once at the top, cut to this length. */
 const REMOVED_MAX_CHARS = 200;
 
 export default async function RoomsPage({ searchParams }: { searchParams: Promise<{ removed?: string | string[] }> }) {
